@@ -1,0 +1,16 @@
+/**
+ * Grade 2 braille for sign text (isomorphic: no DOM, no Node APIs).
+ *
+ * Node: `createNodeTranslator()` in server/braille/nodeTranslator.ts.
+ * Browser (Web Worker): `createBrowserTranslator()` in src/braille/createBrowserTranslator.ts.
+ * Both return a synchronous `BrailleTranslate` once the tables are loaded.
+ */
+export type { BrailleCode, TranslateOptions, BrailleTranslation, BrailleTranslate } from './types'
+export { planSignText, prepareSignText, normaliseSignText } from './prepare'
+export type { PreparedWord, PreparedRun, SignTextPlan, WordTreatment } from './prepare'
+export { createTranslate, tableListFor, BRAILLE_SPACE } from './translate'
+export { LiblouisEngine, BrailleEngineError, TYPEFORM_NO_CONTRACT, MODE_DOTS_UNICODE, MAX_INPUT_CHARS } from './liblouis'
+export type { LiblouisModule, LiblouisInstantiate } from './liblouis'
+export { TABLE_FOR_CODE, TABLE_FILES, TABLE_DIR } from './tables'
+export { cellToDots, cellsToDots, dotsToCell, dotsLabel, isSixDotBraille } from './dots'
+export { unicodeToBrf, brfToUnicode, toBrfFile, BrfError } from './brf'
