@@ -6,7 +6,7 @@
  * Both return a synchronous `BrailleTranslate` once the tables are loaded.
  */
 export type { BrailleCode, TranslateOptions, BrailleTranslation, BrailleTranslate } from './types'
-export { planSignText, prepareSignText, normaliseSignText } from './prepare'
+export { planSignText, prepareSignText, normaliseSignText, splitKeptWords } from './prepare'
 export type { PreparedWord, PreparedRun, SignTextPlan, WordTreatment } from './prepare'
 export { createTranslate, tableListFor, BRAILLE_SPACE } from './translate'
 export { LiblouisEngine, BrailleEngineError, TYPEFORM_NO_CONTRACT, MODE_DOTS_UNICODE, MAX_INPUT_CHARS } from './liblouis'

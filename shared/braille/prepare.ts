@@ -194,3 +194,15 @@ export function planSignText(text: string, opts: Pick<TranslateOptions, 'acronym
 export function prepareSignText(text: string, opts: Pick<TranslateOptions, 'acronyms' | 'properNouns' | 'capitalPolicy'> = {}): string {
   return planSignText(text, opts).prepared
 }
+
+/**
+ * Splits "keep as printed" words (CLI `--keep`, or a single list in a form) by how they are
+ * written: all capitals (`ADA`, `IT`) -> acronym (capitals, no contractions); any lower-case letter
+ * (`McKinley`, `Harbor`) -> proper noun, spelled as given.
+ */
+export function splitKeptWords(words: readonly string[]): { acronyms: string[]; properNouns: string[] } {
+  const acronyms: string[] = []
+  const properNouns: string[] = []
+  for (const w of words) (w === w.toLocaleUpperCase('en-US') ? acronyms : properNouns).push(w)
+  return { acronyms, properNouns }
+}
