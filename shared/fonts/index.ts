@@ -1,0 +1,5 @@
+/** Font loading, profiles and unit-size text layout (isomorphic). */
+export * from './registry'
+export * from './profile'
+export * from './layoutText'
+export * from './outline'

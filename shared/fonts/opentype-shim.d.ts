@@ -1,0 +1,1 @@
+declare module 'opentype.js/dist/opentype.mjs' { export function parse(buffer: ArrayBuffer, opt?: Record<string, unknown>): any }

@@ -1,0 +1,5 @@
+/** Pure geometry: outlines → polygons, distances with bounds pruning, bounds. */
+export * from './types'
+export * from './flatten'
+export * from './shape'
+export * from './distance'
