@@ -102,7 +102,9 @@ interface Piece {
  *   words in `properNouns` are written as listed (`MCKINLEY` with `McKinley` listed -> `McKinley`);
  * - separate numbers stay separate: `Rooms 101 102` is translated as runs split between the two
  *   numbers, because liblouis otherwise reads a space between digits as a numeric space
- *   (one number, `⠼⠁⠚⠁⠐⠁⠚⠃`).
+ *   (one number, `⠼⠁⠚⠁⠐⠁⠚⠃`);
+ * - fully capitalised tokens (acronyms, single letters, `2B`) are runs of their own, so no
+ *   capitals passage forms (see below).
  */
 export function planSignText(text: string, opts: Pick<TranslateOptions, 'acronyms' | 'properNouns' | 'capitalPolicy'> = {}): SignTextPlan {
   const acronyms = wordMap(opts.acronyms)
@@ -110,7 +112,7 @@ export function planSignText(text: string, opts: Pick<TranslateOptions, 'acronym
   const capitalFirst = (opts.capitalPolicy ?? 'first-word') === 'first-word'
   const normalised = normaliseSignText(text)
   const words: PreparedWord[] = []
-  const tokens: Piece[][] = []
+  const tokens: { pieces: Piece[]; isolate: boolean }[] = []
   let sentenceStart = true
 
   for (const token of normalised ? normalised.split(' ') : []) {
@@ -163,17 +165,25 @@ export function planSignText(text: string, opts: Pick<TranslateOptions, 'acronym
       pieces.push({ text: prepared, noContract })
       if (trail) pieces.push({ text: trail, noContract: false })
     }
-    tokens.push(pieces)
+    const preparedToken = pieces.map((p) => p.text).join('')
+    const letters = preparedToken.replace(/[^\p{L}]/gu, '')
+    // A fully capitalised token (acronym, single letter, `2B`) is translated on its own, so that
+    // liblouis never forms a capitals passage over several of them: §703.3.1 wants indicators on
+    // those words only, and inside a passage liblouis 3.2.0 (and 3.24) drops the indicator that
+    // ends numeric mode (`2A 2B 2C` -> `⠼⠃⠃` reads "22").
+    const isolate = letters !== '' && letters === letters.toLocaleUpperCase('en-US') && letters !== letters.toLocaleLowerCase('en-US')
+    tokens.push({ pieces, isolate })
     if (SENTENCE_END.test(token) && !/^(\p{L}\.)+$/u.test(token)) sentenceStart = true
   }
 
   const runs: PreparedRun[] = []
   let current: PreparedRun | null = null
   let previousEndsWithDigit = false
-  for (const pieces of tokens) {
+  let previousIsolated = false
+  for (const { pieces, isolate } of tokens) {
     const tokenText = pieces.map((p) => p.text).join('')
     const startsWithDigit = /^\p{N}/u.test(tokenText)
-    if (current && !(previousEndsWithDigit && startsWithDigit)) {
+    if (current && !(previousEndsWithDigit && startsWithDigit) && !isolate && !previousIsolated) {
       current.text += ' '
       current.typeform.push(0)
     } else {
@@ -185,6 +195,7 @@ export function planSignText(text: string, opts: Pick<TranslateOptions, 'acronym
       for (let i = 0; i < p.text.length; i++) current.typeform.push(p.noContract ? TYPEFORM_NO_CONTRACT : 0)
     }
     previousEndsWithDigit = /\p{N}$/u.test(tokenText)
+    previousIsolated = isolate
   }
 
   return { input: text, prepared: runs.map((r) => r.text).join(' '), words, runs }
