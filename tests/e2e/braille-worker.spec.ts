@@ -71,6 +71,19 @@ test.afterAll(async () => {
   if (outDir) rmSync(outDir, { recursive: true, force: true })
 })
 
+test('a classic (non-module) worker loads the translator too', async () => {
+  const page = await browser.newPage()
+  const problems: string[] = []
+  page.on('pageerror', (e) => problems.push(e.message))
+  await page.goto(origin + '/?classic')
+  await page.waitForFunction(() => (window as unknown as { brailleCheck?: unknown }).brailleCheck !== undefined, null, { timeout: 30_000 })
+  const check = (await page.evaluate(() => (window as unknown as { brailleCheck?: unknown }).brailleCheck)) as { error?: string; results?: { unicode: string }[] }
+  expect(check.error, String(check.error)).toBeUndefined()
+  expect(check.results?.[0].unicode).toBe('⠠⠗⠕⠕⠍⠀⠼⠁⠚⠁')
+  expect(problems).toEqual([])
+  await page.close()
+})
+
 test('translates sign text in a Web Worker in Chromium (UEB and EBAE, CSP without eval)', async () => {
   const page = await browser.newPage()
   const problems: string[] = []
