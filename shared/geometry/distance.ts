@@ -94,11 +94,15 @@ function overlapping(a: Shape, b: Shape, bdx: number, bdy: number): Vec2 | null 
 
 /**
  * Minimum distance between the outlines of two shapes, B translated by
- * (bdx, bdy); 0 when they overlap. Branch and bound:
- * PERF: segments are ranked by the distance of their bounds to the other shape's
- * bounds; a segment whose bound is already ≥ the best distance found is never
- * measured exactly, so adjacent glyphs cost a few dozen exact segment tests
- * instead of n·m (see scripts/bench.ts for the ratio against `shapeDistanceBrute`).
+ * (bdx, bdy); 0 when they overlap.
+ * PERF: bounding-box pruning in three linear passes, no sorting: (1) each
+ * segment gets a lower bound = distance from its box to the other shape's box;
+ * (2) an upper bound comes from exact tests between the few segments with the
+ * smallest lower bounds; (3) only segments whose lower bound beats that upper
+ * bound are paired, and a pair is measured exactly only when the distance
+ * between the two segment boxes beats the best so far. Adjacent glyphs then cost
+ * a few dozen exact tests instead of n·m (scripts/bench.ts prints the ratio
+ * against `shapeDistanceBrute`).
  */
 export function shapeDistance(a: Shape, b: Shape, bdx = 0, bdy = 0): Closest {
   const sa = a.segs
@@ -111,59 +115,76 @@ export function shapeDistance(a: Shape, b: Shape, bdx = 0, bdy = 0): Closest {
   const inside = overlapping(a, b, bdx, bdy)
   if (inside) return { distance: 0, a: inside, b: inside }
 
-  // Lower bound of each segment of A to B's bounds, and of B's segments to A's bounds.
+  // (1) Lower bounds (squared) of A's segments to B's box and of B's segments to A's box.
   const bMinX = b.bounds.minX + bdx
   const bMaxX = b.bounds.maxX + bdx
   const bMinY = b.bounds.minY + bdy
   const bMaxY = b.bounds.maxY + bdy
-  const la = new Float64Array(na)
+  const la = scratchA.length >= na ? scratchA : (scratchA = new Float64Array(na * 2))
+  let bestA = 0
   for (let i = 0; i < na; i++) {
     const k = 4 * i
     const dx = Math.max(0, ba[k] - bMaxX, bMinX - ba[k + 2])
     const dy = Math.max(0, ba[k + 1] - bMaxY, bMinY - ba[k + 3])
     la[i] = dx * dx + dy * dy
+    if (la[i] < la[bestA]) bestA = i
   }
   const a0 = a.bounds
-  const lb = new Float64Array(nb)
+  const lb = scratchB.length >= nb ? scratchB : (scratchB = new Float64Array(nb * 2))
+  let bestB = 0
   for (let j = 0; j < nb; j++) {
     const k = 4 * j
     const dx = Math.max(0, bb[k] + bdx - a0.maxX, a0.minX - (bb[k + 2] + bdx))
     const dy = Math.max(0, bb[k + 1] + bdy - a0.maxY, a0.minY - (bb[k + 3] + bdy))
     lb[j] = dx * dx + dy * dy
+    if (lb[j] < lb[bestB]) bestB = j
   }
-  const ia = sortedIndex(la)
-  const ib = sortedIndex(lb)
 
   let best = Infinity
   let pax = 0, pay = 0, pbx = 0, pby = 0
-  for (let p = 0; p < na; p++) {
-    const i = ia[p]
-    if (la[i] >= best) break
+  const test = (i: number, j: number) => {
+    const k = 4 * i
+    const m = 4 * j
+    segmentClosest(sa[k], sa[k + 1], sa[k + 2], sa[k + 3], sb[m] + bdx, sb[m + 1] + bdy, sb[m + 2] + bdx, sb[m + 3] + bdy)
+    if (out.d2 < best) {
+      best = out.d2
+      pax = out.ax; pay = out.ay; pbx = out.bx; pby = out.by
+    }
+  }
+  // (2) Upper bound: the most promising segment of each side against all of the other side's near ones.
+  test(bestA, bestB)
+  for (let j = 0; j < nb; j++) if (lb[j] < best) test(bestA, j)
+  for (let i = 0; i < na; i++) if (la[i] < best) test(i, bestB)
+
+  // (3) Candidates that can still beat the bound.
+  const ca = candA.length >= na ? candA : (candA = new Uint32Array(na * 2))
+  const cb = candB.length >= nb ? candB : (candB = new Uint32Array(nb * 2))
+  let nca = 0
+  let ncb = 0
+  for (let i = 0; i < na; i++) if (la[i] < best) ca[nca++] = i
+  for (let j = 0; j < nb; j++) if (lb[j] < best) cb[ncb++] = j
+  for (let p = 0; p < nca; p++) {
+    const i = ca[p]
+    if (la[i] >= best) continue
     const k = 4 * i
     const minX = ba[k], minY = ba[k + 1], maxX = ba[k + 2], maxY = ba[k + 3]
-    for (let q = 0; q < nb; q++) {
-      const j = ib[q]
-      if (lb[j] >= best) break
+    for (let q = 0; q < ncb; q++) {
+      const j = cb[q]
       const m = 4 * j
       const dx = Math.max(0, minX - (bb[m + 2] + bdx), bb[m] + bdx - maxX)
       const dy = Math.max(0, minY - (bb[m + 3] + bdy), bb[m + 1] + bdy - maxY)
       if (dx * dx + dy * dy >= best) continue
-      segmentClosest(sa[k], sa[k + 1], sa[k + 2], sa[k + 3], sb[m] + bdx, sb[m + 1] + bdy, sb[m + 2] + bdx, sb[m + 3] + bdy)
-      if (out.d2 < best) {
-        best = out.d2
-        pax = out.ax; pay = out.ay; pbx = out.bx; pby = out.by
-      }
+      test(i, j)
     }
   }
   return { distance: Math.sqrt(best), a: { x: pax, y: pay }, b: { x: pbx, y: pby } }
 }
 
-function sortedIndex(keys: Float64Array): Uint32Array {
-  const idx = new Uint32Array(keys.length)
-  for (let i = 0; i < idx.length; i++) idx[i] = i
-  idx.sort((p, q) => keys[p] - keys[q])
-  return idx
-}
+// Scratch buffers reused across calls (the engine is synchronous, so sharing is safe).
+let scratchA = new Float64Array(256)
+let scratchB = new Float64Array(256)
+let candA = new Uint32Array(256)
+let candB = new Uint32Array(256)
 
 /**
  * Reference implementation: every segment of A against every segment of B, no
