@@ -7,7 +7,9 @@
  */
 export type { BrailleCode, TranslateOptions, BrailleTranslation, BrailleTranslate } from './types'
 export { planSignText, prepareSignText, normaliseSignText, splitKeptWords } from './prepare'
-export type { PreparedWord, PreparedRun, SignTextPlan, WordTreatment } from './prepare'
+export type { PreparedWord, PreparedRun, SignTextPlan, WordTreatment, PlanOptions } from './prepare'
+export { VERIFIED_WORDS, verifiedWithCapitals } from './exceptions'
+export type { VerifiedWord } from './exceptions'
 export { createTranslate, tableListFor, BRAILLE_SPACE } from './translate'
 export { LiblouisEngine, BrailleEngineError, TYPEFORM_NO_CONTRACT, MODE_DOTS_UNICODE, MAX_INPUT_CHARS } from './liblouis'
 export type { LiblouisModule, LiblouisInstantiate } from './liblouis'

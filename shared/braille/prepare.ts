@@ -10,6 +10,7 @@
  */
 import type { TranslateOptions } from './types'
 import { TYPEFORM_NO_CONTRACT } from './liblouis'
+import { verifiedWithCapitals } from './exceptions'
 
 /** Why a word was prepared the way it was (shown to the user beside the braille). */
 export type WordTreatment =
@@ -29,6 +30,8 @@ export interface PreparedWord {
   /** The same word after preparation. */
   prepared: string
   treatment: WordTreatment
+  /** True when the braille comes from the verified exception list, not from liblouis. */
+  verified?: boolean
 }
 
 /** A piece of prepared text translated in one liblouis call; runs are joined by a braille space. */
@@ -36,6 +39,14 @@ export interface PreparedRun {
   text: string
   /** liblouis typeform per character of `text` (TYPEFORM_NO_CONTRACT on acronym letters). */
   typeform: number[]
+  /** Braille from the verified exception list (capital indicators included): liblouis is not called. */
+  fixed?: string
+}
+
+/** Options of planSignText beyond the translate options. */
+export interface PlanOptions extends Pick<TranslateOptions, 'acronyms' | 'properNouns' | 'capitalPolicy'> {
+  /** Verified words for this code: lower-case print -> braille without capital indicators. */
+  verifiedWords?: ReadonlyMap<string, string>
 }
 
 export interface SignTextPlan {
@@ -106,13 +117,13 @@ interface Piece {
  * - fully capitalised tokens (acronyms, single letters, `2B`) are runs of their own, so no
  *   capitals passage forms (see below).
  */
-export function planSignText(text: string, opts: Pick<TranslateOptions, 'acronyms' | 'properNouns' | 'capitalPolicy'> = {}): SignTextPlan {
+export function planSignText(text: string, opts: PlanOptions = {}): SignTextPlan {
   const acronyms = wordMap(opts.acronyms)
   const properNouns = wordMap(opts.properNouns)
   const capitalFirst = (opts.capitalPolicy ?? 'first-word') === 'first-word'
   const normalised = normaliseSignText(text)
   const words: PreparedWord[] = []
-  const tokens: { pieces: Piece[]; isolate: boolean }[] = []
+  const tokens: { pieces: Piece[]; isolate: boolean; fixed?: string }[] = []
   let sentenceStart = true
 
   for (const token of normalised ? normalised.split(' ') : []) {
@@ -172,7 +183,15 @@ export function planSignText(text: string, opts: Pick<TranslateOptions, 'acronym
     // those words only, and inside a passage liblouis 3.2.0 (and 3.24) drops the indicator that
     // ends numeric mode (`2A 2B 2C` -> `⠼⠃⠃` reads "22").
     const isolate = letters !== '' && letters === letters.toLocaleUpperCase('en-US') && letters !== letters.toLocaleLowerCase('en-US')
-    tokens.push({ pieces, isolate })
+    // A whole word on the verified list (no punctuation around it, not an acronym) is its own run.
+    const lastWord = words[words.length - 1]
+    const verified = pieces.length === 1 && lastWord && lastWord.prepared === pieces[0].text && lastWord.treatment !== 'acronym' ? opts.verifiedWords?.get(preparedToken.toLocaleLowerCase('en-US')) : undefined
+    if (verified !== undefined) {
+      lastWord.verified = true
+      tokens.push({ pieces, isolate: true, fixed: verifiedWithCapitals(preparedToken, verified) })
+    } else {
+      tokens.push({ pieces, isolate })
+    }
     if (SENTENCE_END.test(token) && !/^(\p{L}\.)+$/u.test(token)) sentenceStart = true
   }
 
@@ -180,7 +199,7 @@ export function planSignText(text: string, opts: Pick<TranslateOptions, 'acronym
   let current: PreparedRun | null = null
   let previousEndsWithDigit = false
   let previousIsolated = false
-  for (const { pieces, isolate } of tokens) {
+  for (const { pieces, isolate, fixed } of tokens) {
     const tokenText = pieces.map((p) => p.text).join('')
     const startsWithDigit = /^\p{N}/u.test(tokenText)
     if (current && !(previousEndsWithDigit && startsWithDigit) && !isolate && !previousIsolated) {
@@ -188,6 +207,7 @@ export function planSignText(text: string, opts: Pick<TranslateOptions, 'acronym
       current.typeform.push(0)
     } else {
       current = { text: '', typeform: [] }
+      if (fixed !== undefined) current.fixed = fixed
       runs.push(current)
     }
     for (const p of pieces) {
@@ -202,7 +222,7 @@ export function planSignText(text: string, opts: Pick<TranslateOptions, 'acronym
 }
 
 /** The prepared text only (what the UI shows beside the braille). */
-export function prepareSignText(text: string, opts: Pick<TranslateOptions, 'acronyms' | 'properNouns' | 'capitalPolicy'> = {}): string {
+export function prepareSignText(text: string, opts: PlanOptions = {}): string {
   return planSignText(text, opts).prepared
 }
 

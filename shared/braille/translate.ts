@@ -5,6 +5,7 @@ import type { BrailleCode, BrailleTranslate, BrailleTranslation, TranslateOption
 import { planSignText } from './prepare'
 import type { LiblouisEngine } from './liblouis'
 import { TABLE_DIR, TABLE_FOR_CODE } from './tables'
+import { VERIFIED_WORDS, type VerifiedWord } from './exceptions'
 
 /** Braille space (U+2800), also used to join runs. */
 export const BRAILLE_SPACE = '\u2800'
@@ -23,8 +24,13 @@ export function tableListFor(code: BrailleCode): string {
  * Builds the sign translator over one liblouis engine. Synchronous: the engine's module must be
  * loaded (Node: at require; browser: after the tables are written to MEMFS).
  */
-export function createTranslate(engine: LiblouisEngine): BrailleTranslate {
+export function createTranslate(engine: LiblouisEngine, verified: readonly VerifiedWord[] = VERIFIED_WORDS): BrailleTranslate {
   const unsupportedCache = new Map<string, boolean>()
+  const verifiedByCode = new Map<BrailleCode, Map<string, string>>()
+  for (const v of verified) {
+    if (!verifiedByCode.has(v.code)) verifiedByCode.set(v.code, new Map())
+    verifiedByCode.get(v.code)!.set(v.print.toLocaleLowerCase('en-US'), v.braille)
+  }
 
   function isUnsupported(ch: string, tableList: string): boolean {
     const key = `${tableList}\u0000${ch}`
@@ -39,8 +45,8 @@ export function createTranslate(engine: LiblouisEngine): BrailleTranslate {
   return function translate(text: string, opts: TranslateOptions): BrailleTranslation {
     if (typeof text !== 'string') throw new TypeError('Braille text must be a string')
     const tableList = tableListFor(opts?.code)
-    const plan = planSignText(text, opts)
-    const cells = plan.runs.map((run) => engine.translate(run.text, tableList, run.typeform))
+    const plan = planSignText(text, { ...opts, verifiedWords: verifiedByCode.get(opts.code) })
+    const cells = plan.runs.map((run) => run.fixed ?? engine.translate(run.text, tableList, run.typeform))
     const unicode = cells.join(BRAILLE_SPACE)
     const result: BrailleTranslation = { input: text, prepared: plan.prepared, unicode }
     if (EIGHT_DOT_CELL.test(unicode)) {

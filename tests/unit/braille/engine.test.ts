@@ -8,7 +8,9 @@ import { sampleSignStrings } from '../../../server/braille/signSamples'
 
 const UEB = '/tables/en-ueb-g2.ctb'
 
-describe('Node loader', () => {
+// Each liblouis instance costs 0.1-0.5 s to load and ~0.25 s to compile UEB; on 2 shared cores
+// that exceeds vitest's 5 s default for the tests that make several.
+describe('Node loader', { timeout: 60_000 }, () => {
   it('is liblouis 3.2.0 and leaves no uncaughtException handler behind', async () => {
     const before = process.listeners('uncaughtException').length
     const engine = createNodeEngine()
@@ -25,7 +27,7 @@ describe('Node loader', () => {
   })
 })
 
-describe('odd input', () => {
+describe('odd input', { timeout: 30_000 }, () => {
   const engine = createNodeEngine()
   const translate = createTranslate(engine)
 
@@ -74,7 +76,7 @@ describe('odd input', () => {
   })
 })
 
-describe('abort recovery', () => {
+describe('abort recovery', { timeout: 60_000 }, () => {
   it('a real emscripten abort (16 MiB heap exhausted) drops the instance; the call succeeds on a fresh one, five times over', () => {
     const engine = createNodeEngine()
     const translate = createTranslate(engine)
@@ -132,7 +134,7 @@ describe('abort recovery', () => {
   })
 })
 
-describe('many calls', () => {
+describe('many calls', { timeout: 60_000 }, () => {
   it('1,000 sign strings in both codes on one instance: no aborts, no leak, 6-dot output', () => {
     const engine = createNodeEngine()
     const translate = createTranslate(engine)

@@ -7,7 +7,10 @@
  * liblouis output where both engines agree, not checked by hand.
  */
 import { beforeAll, describe, expect, it } from 'vitest'
-import { createNodeTranslator } from '../../../server/braille/nodeTranslator'
+import { createNodeEngine, createNodeTranslator } from '../../../server/braille/nodeTranslator'
+import { createTranslate } from '../../../shared/braille/translate'
+import { VERIFIED_WORDS, verifiedWithCapitals, type VerifiedWord } from '../../../shared/braille/exceptions'
+import { planSignText } from '../../../shared/braille/prepare'
 import type { BrailleCode, BrailleTranslate, TranslateOptions } from '../../../shared/braille/types'
 
 let translate: BrailleTranslate
@@ -62,5 +65,43 @@ describe('sign translation: §703.3.1 policy + Grade 2', () => {
 
   it('rejects an unknown code with a clear error', () => {
     expect(() => translate('ROOM', { code: 'grade3' as BrailleCode })).toThrow(/Unknown braille code "grade3"/)
+  })
+})
+
+describe('verified exception list', () => {
+  // "readme": liblouis 3.2.0 gives ⠗⠑⠁⠙⠍⠑, liblouis 3.24 gives ⠗⠂⠙⠍⠑ ("ea" groupsign, UEB rule 10.6).
+  // Used here only to exercise the mechanism; it is not a sign word.
+  const list: VerifiedWord[] = [{ code: 'ueb', print: 'readme', braille: '⠗⠂⠙⠍⠑', source: 'test fixture: liblouis 3.24 output' }]
+  const withList = createTranslate(createNodeEngine(), list)
+
+  it('the shipped list is empty until a sign word is found wrong (cross-check: 151 of 151 agree)', () => {
+    expect(VERIFIED_WORDS).toEqual([])
+  })
+
+  it('liblouis 3.2.0 alone gives the other braille (so the list really changes the answer)', () => {
+    expect(translate('README FILE', { code: 'ueb' }).unicode).toBe('⠠⠗⠑⠁⠙⠍⠑⠀⠋⠊⠇⠑')
+  })
+
+  it('a listed word is replaced, with the capital indicator as prepared', () => {
+    expect(withList('README FILE', { code: 'ueb' }).unicode).toBe('⠠⠗⠂⠙⠍⠑⠀⠋⠊⠇⠑')
+    expect(withList('THE README', { code: 'ueb' }).unicode).toBe('⠠⠮⠀⠗⠂⠙⠍⠑')
+  })
+
+  it('applies only to its code, and not to acronyms or words with punctuation attached', () => {
+    expect(withList('README', { code: 'ebae' }).unicode).not.toContain('⠂')
+    expect(withList('README', { code: 'ueb', acronyms: ['README'] }).unicode).toBe('⠠⠠⠗⠑⠁⠙⠍⠑')
+    expect(withList('README.', { code: 'ueb' }).unicode).toBe('⠠⠗⠑⠁⠙⠍⠑⠲')
+  })
+
+  it('the plan marks the word as verified', () => {
+    const plan = planSignText('README FILE', { verifiedWords: new Map([['readme', '⠗⠂⠙⠍⠑']]) })
+    expect(plan.words[0]).toMatchObject({ prepared: 'Readme', verified: true })
+    expect(plan.runs.map((r) => r.fixed)).toEqual(['⠠⠗⠂⠙⠍⠑', undefined])
+  })
+
+  it('capital indicators: ⠠ for a capitalised word, ⠠⠠ for all capitals, none for lower case', () => {
+    expect(verifiedWithCapitals('Readme', '⠗⠂⠙⠍⠑')).toBe('⠠⠗⠂⠙⠍⠑')
+    expect(verifiedWithCapitals('README', '⠗⠂⠙⠍⠑')).toBe('⠠⠠⠗⠂⠙⠍⠑')
+    expect(verifiedWithCapitals('readme', '⠗⠂⠙⠍⠑')).toBe('⠗⠂⠙⠍⠑')
   })
 })
