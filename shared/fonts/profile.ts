@@ -74,12 +74,20 @@ export function profileFromOutlines(args: {
   if (I.length === 0) throw new Error('font has no outline for uppercase "I"')
   let iTop = -Infinity
   for (const c of I) for (let k = 1; k < c.length; k += 2) iTop = Math.max(iTop, c[k])
-  // First pass: stem at a provisional mid-height, then the height at the stem centre.
+  // The I height is read where the stem meets the top: a vertical line through the
+  // stem's centre line (followed up from 25 % and 75 % of the outline height, so an
+  // oblique I is read along its own axis) crosses the top edge. A flag or sloped
+  // top therefore counts where the stem is, not at its highest corner.
   const provisional = spanAt(horizontalCrossings(I, iTop / 2), NaN)
   if (!provisional) throw new Error('uppercase "I" has no stem at mid-height')
-  const centre0 = (provisional[0] + provisional[1]) / 2
-  const vertical = verticalCrossings(I, centre0)
+  const p25 = spanAt(horizontalCrossings(I, iTop * 0.25), (provisional[0] + provisional[1]) / 2)
+  const p75 = spanAt(horizontalCrossings(I, iTop * 0.75), (provisional[0] + provisional[1]) / 2)
+  const c25 = p25 ? (p25[0] + p25[1]) / 2 : (provisional[0] + provisional[1]) / 2
+  const c75 = p75 ? (p75[0] + p75[1]) / 2 : c25
+  const xTop = c75 + ((c75 - c25) / (iTop * 0.5)) * (iTop * 0.95 - iTop * 0.75)
+  const vertical = verticalCrossings(I, xTop)
   const iHeight = vertical.length ? vertical[vertical.length - 1] : iTop
+  const centre0 = c25 + ((c75 - c25) / (iTop * 0.5)) * (iHeight / 2 - iTop * 0.25)
   const midCross = horizontalCrossings(I, iHeight / 2)
   const mid = spanAt(midCross, centre0)
   if (!mid) throw new Error('uppercase "I" has no stem at mid-height')
@@ -95,10 +103,10 @@ export function profileFromOutlines(args: {
   const headFlare = Math.max(...stemProfile.filter((s) => s.at >= 0.95).map((s) => s.relative))
 
   // Lean: stem centre at 25 % and 75 % of the height.
-  const c25 = spanAt(horizontalCrossings(I, iHeight * 0.25), centre)
-  const c75 = spanAt(horizontalCrossings(I, iHeight * 0.75), centre)
-  const slantDegrees = c25 && c75
-    ? (Math.atan2((c75[0] + c75[1]) / 2 - (c25[0] + c25[1]) / 2, iHeight * 0.5) * 180) / Math.PI
+  const s25 = spanAt(horizontalCrossings(I, iHeight * 0.25), centre)
+  const s75 = spanAt(horizontalCrossings(I, iHeight * 0.75), centre)
+  const slantDegrees = s25 && s75
+    ? (Math.atan2((s75[0] + s75[1]) / 2 - (s25[0] + s25[1]) / 2, iHeight * 0.5) * 180) / Math.PI
     : 0
 
   let oWidth = NaN

@@ -50,6 +50,8 @@ export function fmt(value: number, unit: string): string {
       return `${trim(value, 2)}:1`
     case '×':
       return `${trim(value, 2)} ×`
+    case '':
+      return trim(value, 1)
     default:
       return `${trim(value, 3)} ${unit}`
   }
