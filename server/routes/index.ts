@@ -6,11 +6,24 @@ import { signOutRoute } from './auth-sign-out'
 import { tokenInfoRoute } from './auth-token-info'
 import type { AnyRoute } from './define'
 import { healthRoute } from './health'
+import { lessonRoutes } from './lessons'
 import { createProjectRoute } from './projects-create'
 import { deleteProjectRoute } from './projects-delete'
 import { getProjectRoute } from './projects-get'
 import { listProjectsRoute } from './projects-list'
 import { updateProjectRoute } from './projects-update'
+import { createSignRoute } from './signs-create'
+import { deleteSignRoute } from './signs-delete'
+import { getSignRoute } from './signs-get'
+import { listSignsRoute } from './signs-list'
+import { getRevisionRoute } from './signs-revisions-get'
+import { listRevisionsRoute } from './signs-revisions-list'
+import { restoreRevisionRoute } from './signs-revisions-restore'
+import { updateSignRoute } from './signs-update'
+import { deleteFontRoute } from './fonts-delete'
+import { fontFileRoute } from './fonts-file'
+import { listFontsRoute } from './fonts-list'
+import { uploadFontRoute } from './fonts-upload'
 import { inviteUserRoute } from './users-invite'
 import { listUsersRoute } from './users-list'
 import { updateUserRoute } from './users-update'
@@ -35,8 +48,24 @@ export const routes: readonly AnyRoute[] = [
   getProjectRoute,
   updateProjectRoute,
   deleteProjectRoute,
+  // signs and revisions
+  listSignsRoute,
+  createSignRoute,
+  getSignRoute,
+  updateSignRoute,
+  deleteSignRoute,
+  listRevisionsRoute,
+  getRevisionRoute,
+  restoreRevisionRoute,
+  // fonts
+  listFontsRoute,
+  uploadFontRoute,
+  fontFileRoute,
+  deleteFontRoute,
   // users (admin)
   listUsersRoute,
   inviteUserRoute,
   updateUserRoute,
+  // lessons, practice copies, progress
+  ...lessonRoutes,
 ]

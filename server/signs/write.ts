@@ -1,0 +1,89 @@
+import { and, eq, sql } from 'drizzle-orm'
+import type { RequestHandler } from 'express'
+import { contentHash } from '../../shared/canonical/index'
+import { LAYOUT_MAX_BYTES, type LayoutDocument } from '../../shared/schema/layout'
+import type { SignStatus } from '../../shared/schema/api/signs'
+import type { Transaction } from '../db/client'
+import { newId } from '../db/ids'
+import { signRevisions, signs, type SignRow } from '../db/schema/index'
+import { AppError, conflict } from '../errors'
+
+/** Room for the rest of the body around a document of the maximum size. */
+const BODY_OVERHEAD = 16 * 1024
+
+/**
+ * 413 for a sign body whose document would exceed LAYOUT_MAX_BYTES. express.json already
+ * refuses bodies over 2 MB; this holds layout bodies to the document's own, smaller cap.
+ */
+export function limitLayoutBody(): RequestHandler[] {
+  return [
+    (req, _res, next) => {
+      const length = Number(req.get('Content-Length') ?? 0)
+      if (length > LAYOUT_MAX_BYTES + BODY_OVERHEAD) {
+        return next(new AppError('payload_too_large', `A sign's layout may be at most ${LAYOUT_MAX_BYTES} bytes`))
+      }
+      next()
+    },
+  ]
+}
+
+/**
+ * Status after the document changes: a sign-off belongs to the revision it froze, so an edit
+ * supersedes it; a sign in review goes back to draft (the reviewer was looking at the old
+ * revision and it must be submitted again).
+ */
+export function statusAfterEdit(status: SignStatus): SignStatus {
+  if (status === 'signed-off') return 'superseded'
+  if (status === 'in-review') return 'draft'
+  return status
+}
+
+/** Insert revision `number` of a sign. */
+export async function insertRevision(tx: Transaction, args: { signId: string; number: number; document: LayoutDocument; authorId: string; restoredFrom?: number | null }) {
+  const hash = contentHash(args.document)
+  await tx.insert(signRevisions).values({
+    id: newId(),
+    signId: args.signId,
+    number: args.number,
+    document: args.document,
+    contentHash: hash,
+    authorId: args.authorId,
+    restoredFrom: args.restoredFrom ?? null,
+  })
+  return hash
+}
+
+/**
+ * Apply a change to a sign under optimistic concurrency: the UPDATE matches only the version the
+ * client read; otherwise 409 with the current version and revision, and nothing is written.
+ * With a `document`, revision current+1 is written in the same transaction.
+ */
+export async function updateSignRow(
+  tx: Transaction,
+  current: SignRow,
+  args: { organisationId: string; userId: string; version: number; changes: Partial<Pick<SignRow, 'name' | 'signType' | 'status'>>; document?: LayoutDocument; restoredFrom?: number },
+): Promise<{ revision: number | null; hash: string | null }> {
+  const revision = args.document ? current.currentRevision + 1 : null
+  const set: Record<string, unknown> = { ...args.changes, lastEditorId: args.userId, version: sql`${signs.version} + 1` }
+  if (args.document) {
+    set.document = args.document
+    set.currentRevision = revision
+    set.status = statusAfterEdit(args.changes.status ?? current.status)
+  }
+  const result = await tx
+    .update(signs)
+    .set(set)
+    .where(and(eq(signs.id, current.id), eq(signs.organisationId, args.organisationId), eq(signs.version, args.version)))
+  // mysql2 reports matched rows, so 0 means the version moved on (or the row vanished).
+  if (result[0].affectedRows !== 1) throw staleSign(args.version, current)
+  const hash = args.document ? await insertRevision(tx, { signId: current.id, number: revision!, document: args.document, authorId: args.userId, restoredFrom: args.restoredFrom }) : null
+  return { revision, hash }
+}
+
+/** The 409 a stale write gets. */
+export function staleSign(version: number, current: Pick<SignRow, 'version' | 'currentRevision'>) {
+  return conflict(`The sign was changed by someone else (you edited version ${version}, it is now ${current.version}); reload it or keep yours as a copy`, {
+    currentVersion: current.version,
+    currentRevision: current.currentRevision,
+  })
+}
