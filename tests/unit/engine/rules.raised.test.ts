@@ -40,7 +40,7 @@ const relief: RuleCase[] = [
 
 const caseAndStyle: RuleCase[] = [
   { name: 'uppercase text meets', section: '703.2.2', source: 'S7', rule: 'raised.case', doc: () => {}, status: 'meets', measured: 0 },
-  { name: 'mixed case fails', section: '703.2.2', source: 'S7', rule: 'raised.case', doc: (d) => { el(d, 't1', 'raised-text').lines = ['Exam Room'] }, status: 'fails', measured: 4 } // distinct lowercase letters x, a, m, o,
+  { name: 'mixed case fails', section: '703.2.2', source: 'S7', rule: 'raised.case', doc: (d) => { el(d, 't1', 'raised-text').lines = ['Exam Room'] }, status: 'fails', measured: 4 }, // distinct lowercase letters x, a, m, o
   { name: 'digits and letters "ROOM 2B" meets', section: '703.2.2', source: 'S7', rule: 'raised.case', doc: (d) => { el(d, 't1', 'raised-text').lines = ['ROOM 2B'] }, status: 'meets' },
   { name: 'B612 is sans serif and upright', section: '703.2.3', source: 'S7', rule: 'raised.style', doc: () => {}, status: 'meets', measured: 0 },
   { name: 'slab-serif I fails (stem 3× wider at foot and head)', section: '703.2.3', source: 'S7', rule: 'raised.style', doc: synth('box-serif'), status: 'fails' },
