@@ -128,8 +128,9 @@ export function planSignText(text: string, opts: PlanOptions = {}): SignTextPlan
 
   for (const token of normalised ? normalised.split(' ') : []) {
     const pieces: Piece[] = []
-    // Compounds (`RE-ENTRY`, `MEN/WOMEN`, `X-RAY`) are judged part by part.
-    for (const part of token.split(/([-/\u2010\u2011\u2013\u2014])/u)) {
+    // Compounds (`RE-ENTRY`, `MEN/WOMEN`, `X-RAY`) are judged part by part: split at hyphens, slashes and dashes, and at a period
+    // before a digit (`NO.7` -> `no.7`, not kept as a letter-digit unit).
+    for (const part of token.split(/([-/\u2010\u2011\u2013\u2014]|\.(?=\p{N}))/u)) {
       if (part === '') continue
       const [, lead, core, trail] = ALNUM_EDGE.exec(part) ?? ['', '', part, '']
       if (!core) {

@@ -25,9 +25,9 @@ function lou324(table: string, lines: string[]): string[] {
 let translate: BrailleTranslate
 beforeAll(async () => {
   translate = await createNodeTranslator()
-})
+}, 60_000)
 
-describe.skipIf(!LOU)('sign words: liblouis 3.2.0 (ours) agrees with liblouis 3.24 (lou_translate)', () => {
+describe.skipIf(!LOU)('sign words: liblouis 3.2.0 (ours) agrees with liblouis 3.24 (lou_translate)', { timeout: 60_000 }, () => {
   for (const [code, table] of [['ueb', 'en-ueb-g2.ctb'], ['ebae', 'en-us-g2.ctb']] as const) {
     it(`${code}: all ${SIGN_WORDS.length} prepared sign strings translate identically`, () => {
       const prepared = SIGN_WORDS.map((w) => prepareSignText(w))

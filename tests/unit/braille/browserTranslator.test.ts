@@ -28,9 +28,9 @@ let node: BrailleTranslate
 beforeAll(async () => {
   browser = await createBrowserTranslator({ assetsUrl: pathToFileURL(BROWSER_ASSETS_DIR).href, fetch: fileFetch, importFactory: (u) => import(/* @vite-ignore */ u) })
   node = await createNodeTranslator()
-})
+}, 60_000)
 
-describe('browser assets in public/braille/', () => {
+describe('browser assets in public/braille/', { timeout: 30_000 }, () => {
   it('are exactly what the generator makes from the installed liblouis-build (no drift)', () => {
     for (const [rel, bytes] of buildBrowserAssets()) {
       const committed = readFileSync(path.join(BROWSER_ASSETS_DIR, rel))
@@ -39,7 +39,7 @@ describe('browser assets in public/braille/', () => {
   })
 })
 
-describe('createBrowserTranslator (MEMFS path)', () => {
+describe('createBrowserTranslator (MEMFS path)', { timeout: 60_000 }, () => {
   it('translates ROOM 101 as the braille.md example', () => {
     expect(browser('ROOM 101', { code: 'ueb' }).unicode).toBe('⠠⠗⠕⠕⠍⠀⠼⠁⠚⠁')
   })

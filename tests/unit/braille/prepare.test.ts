@@ -21,6 +21,8 @@ const CASES: { text: string; opts?: Opts; prepared: string; why: string }[] = [
   { text: 'ROOM B.C.', prepared: 'Room B.C.', why: '§703.3.1 initials' },
   { text: 'ROOMS 101 102', prepared: 'Rooms 101 102', why: 'separate numbers stay separate (split into runs, see below)' },
   { text: '2ND FLOOR', prepared: '2nd floor', why: 'ordinal suffix is not a letter designation' },
+  { text: 'ROOM NO.7', prepared: 'Room no.7', why: 'a period before a digit splits the word: "NO" is a word, not a letter-digit unit' },
+  { text: 'LAB V1.2', prepared: 'Lab V1.2', why: 'letter-digit unit before a decimal point kept' },
   { text: 'X-RAY', prepared: 'X-ray', why: 'compound judged part by part: single letter kept' },
   { text: 'MEN/WOMEN', prepared: 'Men/women', why: 'compound judged part by part' },
   { text: "WOMEN'S LOCKERS", prepared: "Women's lockers", why: 'apostrophe stays inside the word' },

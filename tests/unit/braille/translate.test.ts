@@ -16,7 +16,7 @@ import type { BrailleCode, BrailleTranslate, TranslateOptions } from '../../../s
 let translate: BrailleTranslate
 beforeAll(async () => {
   translate = await createNodeTranslator()
-})
+}, 60_000)
 
 const CASES: { text: string; code: BrailleCode; opts?: Omit<TranslateOptions, 'code'>; prepared: string; unicode: string; source: string }[] = [
   { text: 'ROOM 101', code: 'ueb', prepared: 'Room 101', unicode: '⠠⠗⠕⠕⠍⠀⠼⠁⠚⠁', source: 'braille.md' },
