@@ -6,7 +6,7 @@
  * drives Debian's Chromium. Prints the gzip size of what the worker loads.
  */
 import { test, expect, chromium, type Browser } from '@playwright/test'
-import { build } from 'vite'
+import { build, createServer as createViteServer } from 'vite'
 import { createServer, type Server } from 'node:http'
 import { mkdtempSync, readFileSync, readdirSync, rmSync, statSync, existsSync } from 'node:fs'
 import { execFileSync } from 'node:child_process'
@@ -124,4 +124,26 @@ test('translates sign text in a Web Worker in Chromium (UEB and EBAE, CSP withou
   )
   expect(brailleFiles.filter((p) => p.startsWith('/braille/tables/'))).toHaveLength(11)
   expect(brailleFiles).toContain('/braille/liblouis-3.2.0.mjs')
+})
+
+test('works from the Vite dev server too (module worker, assets from public/)', async () => {
+  test.setTimeout(120_000)
+  const vite = await createViteServer({ configFile: false, root: fixture, publicDir: path.join(repo, 'public'), logLevel: 'error', server: { host: '127.0.0.1', port: 0, hmr: false } })
+  await vite.listen()
+  try {
+    const address = vite.httpServer?.address()
+    const url = `http://127.0.0.1:${typeof address === 'object' && address ? address.port : 0}/`
+    const page = await browser.newPage()
+    const problems: string[] = []
+    page.on('pageerror', (e) => problems.push(e.message))
+    await page.goto(url)
+    await page.waitForFunction(() => (window as unknown as { brailleCheck?: unknown }).brailleCheck !== undefined, null, { timeout: 60_000 })
+    const check = (await page.evaluate(() => (window as unknown as { brailleCheck?: unknown }).brailleCheck)) as { error?: string; results?: { unicode: string }[] }
+    expect(check.error, String(check.error)).toBeUndefined()
+    expect(check.results?.map((r) => r.unicode)[2]).toBe('⠠⠗⠕⠕⠍⠀⠼⠃⠠⠃')
+    expect(problems).toEqual([])
+    await page.close()
+  } finally {
+    await vite.close()
+  }
 })
