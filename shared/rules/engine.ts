@@ -1,5 +1,5 @@
 import type { LayoutDocument, SignType } from '../schema/layout'
-import { parseLayout, type LayoutIssue } from '../schema/layout'
+import { LAYOUT_MAX_BYTES, parseLayout, type LayoutIssue } from '../schema/layout'
 import { getStandard } from '../standards'
 import { rangeFor, type StandardId, type StandardProfile } from '../standards/types'
 import { measureLayout, type MeasureContext } from './measure'
@@ -114,4 +114,29 @@ export function checkUnknown(
   })
   if (missing.length) return { ok: false, issues: missing }
   return { ok: true, report: checkLayout(parsed.doc, ctx), doc: parsed.doc }
+}
+
+/** Outcome of checking JSON text: a report, or why the text is not a checkable document. */
+export type CheckTextResult =
+  | { ok: true; report: CheckReport; doc: LayoutDocument }
+  | { ok: false; reason: 'too-large' | 'not-json' | 'invalid'; issues: LayoutIssue[] }
+
+/**
+ * Check a layout document given as JSON text (CLI, uploads): refuses text over
+ * LAYOUT_MAX_BYTES before parsing, reports JSON syntax errors and invalid fields
+ * by path. Never throws for bad input.
+ */
+export function checkLayoutText(text: string, ctx: CheckContext): CheckTextResult {
+  const bytes = new TextEncoder().encode(text).length
+  if (bytes > LAYOUT_MAX_BYTES) {
+    return { ok: false, reason: 'too-large', issues: [{ path: '(document)', message: `document is ${bytes} bytes; the limit is ${LAYOUT_MAX_BYTES}` }] }
+  }
+  let raw: unknown
+  try {
+    raw = JSON.parse(text)
+  } catch (e) {
+    return { ok: false, reason: 'not-json', issues: [{ path: '(document)', message: `not valid JSON: ${(e as Error).message}` }] }
+  }
+  const r = checkUnknown(raw, ctx)
+  return r.ok ? r : { ok: false, reason: 'invalid', issues: r.issues }
 }

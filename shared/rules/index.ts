@@ -2,8 +2,8 @@
  * The rules engine (isomorphic): `checkLayout(doc, ctx)` measures a layout once
  * and judges it against a standard profile.
  */
-export { checkLayout, checkUnknown, ENGINE_VERSION, TACTILE_SIGN_TYPES, scopeReason } from './engine'
-export type { CheckContext } from './engine'
+export { checkLayout, checkUnknown, checkLayoutText, ENGINE_VERSION, TACTILE_SIGN_TYPES, scopeReason } from './engine'
+export type { CheckContext, CheckTextResult } from './engine'
 export { RULES } from './registry'
 export { measureLayout, normaliseCells } from './measure'
 export type { MeasureContext } from './measure'
