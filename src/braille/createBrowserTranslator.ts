@@ -10,7 +10,7 @@ import { LiblouisEngine } from '../../shared/braille/liblouis'
 import { createMemfsInstantiate, type LiblouisFactory } from '../../shared/braille/memfs'
 import { TABLE_FILES } from '../../shared/braille/tables'
 import { createTranslate } from '../../shared/braille/translate'
-import type { BrailleTranslate } from '../../shared/braille/types'
+import type { BrailleCode, BrailleTranslate } from '../../shared/braille/types'
 
 /** Build file name under the assets folder (kept in step with server/braille/browserAssets.ts). */
 const BUILD_FILE = 'liblouis-3.2.0.mjs'
@@ -22,6 +22,11 @@ export interface BrowserTranslatorOptions {
   fetch?: (url: string) => Promise<{ ok: boolean; status: number; arrayBuffer(): Promise<ArrayBuffer> }>
   /** Injected for tests; defaults to a dynamic import of the build URL. */
   importFactory?: (url: string) => Promise<{ default: LiblouisFactory }>
+  /**
+   * Codes whose table is compiled before the promise resolves (default `['ueb']`), so the first
+   * translation the user waits for is fast. `[]` defers it to the first call.
+   */
+  warmUp?: BrailleCode[]
 }
 
 function defaultAssetsUrl(): string {
@@ -47,5 +52,7 @@ export async function createBrowserTranslator(opts: BrowserTranslatorOptions = {
   const tables = new Map(TABLE_FILES.map((name, i) => [name, tableBytes[i]] as const))
   const engine = new LiblouisEngine(createMemfsInstantiate(factoryModule.default, tables))
   engine.current()
-  return createTranslate(engine)
+  const translate = createTranslate(engine)
+  for (const code of opts.warmUp ?? ['ueb']) translate('a', { code })
+  return translate
 }
