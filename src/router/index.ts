@@ -24,6 +24,7 @@ export const routes: RouteRecordRaw[] = [
   { path: '/reset-password', name: 'reset-password', component: () => import('../views/SetPasswordView.vue'), props: { mode: 'reset' }, meta: { public: true, title: 'Reset password' } },
   { path: '/projects', name: 'projects', component: () => import('../views/ProjectsView.vue'), meta: { title: 'Projects' } },
   { path: '/projects/:id', name: 'project', component: () => import('../views/ProjectView.vue'), props: true, meta: { title: 'Project' } },
+  { path: '/projects/:projectId/signs/:signId', name: 'sign-editor', component: () => import('../views/SignEditorView.vue'), props: true, meta: { title: 'Sign editor' } },
   { path: '/admin/users', name: 'users', component: () => import('../views/UsersView.vue'), meta: { roles: ['admin'], title: 'Users' } },
   { path: '/forbidden', name: 'forbidden', component: () => import('../views/ForbiddenView.vue'), meta: { title: 'Not allowed' } },
   { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('../views/NotFoundView.vue'), meta: { public: true, title: 'Page not found' } },
