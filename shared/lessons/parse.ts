@@ -126,7 +126,10 @@ export function buildCatalogue(files: ReadonlyMap<string, string>): Lesson[] {
       const raw = json(file)
       if (raw === undefined) return []
       const r = LessonExampleSchema.safeParse(raw)
-      if (!r.success) return void issues.push(...zIssues(file, r.error)) ?? []
+      if (!r.success) {
+        issues.push(...zIssues(file, r.error))
+        return []
+      }
       if (r.data.id !== id) issues.push({ file, path: 'id', message: `id "${r.data.id}" does not match the file name` })
       return [r.data]
     })
@@ -135,7 +138,10 @@ export function buildCatalogue(files: ReadonlyMap<string, string>): Lesson[] {
       const raw = json(file)
       if (raw === undefined) return []
       const r = PracticeSignSchema.safeParse(raw)
-      if (!r.success) return void issues.push(...zIssues(file, r.error)) ?? []
+      if (!r.success) {
+        issues.push(...zIssues(file, r.error))
+        return []
+      }
       if (r.data.id !== id) issues.push({ file, path: 'id', message: `id "${r.data.id}" does not match the file name` })
       return [r.data]
     })

@@ -45,3 +45,33 @@ export function judgePractice(practice: PracticeSign, report: CheckReport): Prac
   }
   return { solved: planted.every((p) => p.fixed) && newFailures.length === 0, planted, newFailures }
 }
+
+/**
+ * Fields of a practice copy that differ from the original practice sign outside
+ * its `editable` paths. Elements are addressed by id (`elements.braille.position.y`);
+ * adding, removing or reordering elements is a change of `elements` itself.
+ * The practice is about fixing the planted faults, not about redrawing the sign.
+ */
+export function changesOutsideEditable(original: unknown, edited: unknown, editable: readonly string[]): string[] {
+  const out: string[] = []
+  const allowed = (path: string) => editable.some((e) => path === e || path.startsWith(`${e}.`))
+  const walk = (a: unknown, b: unknown, path: string) => {
+    if (path && allowed(path)) return
+    if (Object.is(a, b)) return
+    if (path === 'elements' && Array.isArray(a) && Array.isArray(b)) {
+      const idsA = a.map((e) => (e as { id?: string }).id)
+      const idsB = b.map((e) => (e as { id?: string }).id)
+      if (idsA.join('\u0000') !== idsB.join('\u0000')) return void out.push('elements')
+      a.forEach((el, i) => walk(el, b[i], `elements.${idsA[i]}`))
+      return
+    }
+    if (a && b && typeof a === 'object' && typeof b === 'object' && Array.isArray(a) === Array.isArray(b)) {
+      const keys = new Set([...Object.keys(a), ...Object.keys(b)])
+      for (const k of keys) walk((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k], path ? `${path}.${k}` : k)
+      return
+    }
+    out.push(path || '(document)')
+  }
+  walk(original, edited, '')
+  return out
+}

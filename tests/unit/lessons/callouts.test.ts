@@ -11,6 +11,11 @@ import type { LayoutDocument } from '../../../shared/schema/layout'
 import type { StandardId } from '../../../shared/standards/types'
 
 const cat = lessonCatalogue()
+const brailleOf = (d: LayoutDocument) => {
+  const b = d.elements.find((e) => e.id === 'braille')
+  if (b?.kind !== 'braille') throw new Error('no braille element')
+  return b
+}
 const fonts = nodeFontRegistry()
 let translate: BrailleTranslate
 beforeAll(async () => {
@@ -24,7 +29,7 @@ describe('callouts follow the document and the standard', () => {
     const doc = structuredClone(ex.document)
     const before = buildCallouts(check(doc, 'ada-2010'), ex.callouts, doc).find((c) => c.id === 'braille.separation-text')!
     expect(before).toMatchObject({ status: 'meets', valueText: '0.45 in', limitText: '0.375 in minimum', section: '703.3.2' })
-    doc.elements.find((e) => e.id === 'braille')!.position.y -= 0.15
+    brailleOf(doc).position.y -= 0.15
     const after = buildCallouts(check(doc, 'ada-2010'), ex.callouts, doc).find((c) => c.id === 'braille.separation-text')!
     expect(after).toMatchObject({ status: 'fails', valueText: '0.3 in' })
     expect(after.dimension!.from.y).toBeCloseTo(before.dimension!.from.y - 0.15, 6)

@@ -9,6 +9,11 @@ import { LayoutDocumentSchema, type LayoutDocument } from '../../../shared/schem
 import { STANDARD_IDS, type StandardId } from '../../../shared/standards/types'
 
 const cat = lessonCatalogue()
+const brailleOf = (d: LayoutDocument) => {
+  const b = d.elements.find((e) => e.id === 'braille')
+  if (b?.kind !== 'braille') throw new Error('no braille element')
+  return b
+}
 const fonts = nodeFontRegistry()
 let translate: BrailleTranslate
 beforeAll(async () => {
@@ -74,7 +79,7 @@ const FIXES: Record<string, (d: LayoutDocument) => void> = {
     t.tracking = 0.06
   },
   'braille-gap-practice': (d) => {
-    const b = d.elements.find((e) => e.id === 'braille')!
+    const b = brailleOf(d)
     b.position.y += 0.25
   },
   'pictogram-field-practice': (d) => {
@@ -146,7 +151,7 @@ describe('judging a practice copy', () => {
   it('reports a new failure when the fix breaks another rule, without numbers', () => {
     const { practice } = cat.practice('braille-gap-practice')!
     const doc = structuredClone(practice.document)
-    const b = doc.elements.find((e) => e.id === 'braille')!
+    const b = brailleOf(doc)
     b.position.y += 0.25
     doc.installation.mountingHeight = 40
     const v = judgePractice(practice, check(doc, practice.standard))
