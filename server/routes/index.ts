@@ -7,7 +7,6 @@ import { tokenInfoRoute } from './auth-token-info'
 import type { AnyRoute } from './define'
 import { healthRoute } from './health'
 import { lessonRoutes } from './lessons'
-import { lessonRoutes } from './lessons'
 import { createProjectRoute } from './projects-create'
 import { deleteProjectRoute } from './projects-delete'
 import { getProjectRoute } from './projects-get'
@@ -67,8 +66,6 @@ export const routes: readonly AnyRoute[] = [
   listUsersRoute,
   inviteUserRoute,
   updateUserRoute,
-  // lessons, practice copies, progress
-  ...lessonRoutes,
   // lessons, practice copies, progress
   ...lessonRoutes,
 ]
