@@ -1,16 +1,14 @@
 import { readFileSync } from 'node:fs'
 import path from 'node:path'
-import { fileURLToPath } from 'node:url'
 import { createHash } from 'node:crypto'
-import { B612_BOLD_ID, B612_ID, loadFont, type FontEntry } from '../../shared/fonts/registry'
+import type { FontEntry } from '../../shared/fonts/registry'
+import { BUNDLED_FONTS, FONTS_DIR, nodeFontRegistry } from '../engine/nodeFonts'
 
-const FONTS_DIR = path.join(path.dirname(fileURLToPath(import.meta.url)), '..', '..', 'fonts')
+/** Display names of the fonts that ship with the app (B612, OFL-1.1, WOFF). */
+const NAMES: Record<string, string> = { b612: 'B612 Regular', 'b612-bold': 'B612 Bold', 'b612-italic': 'B612 Italic' }
 
-/** The fonts that ship with the app: B612 Regular and Bold (OFL-1.1, WOFF). */
-export const BUILTIN_FONTS = [
-  { id: B612_ID, name: 'B612 Regular', file: 'b612-latin-400-normal.woff' },
-  { id: B612_BOLD_ID, name: 'B612 Bold', file: 'b612-latin-700-normal.woff' },
-] as const
+/** The built-in fonts in list order: the engine's bundled set (server/engine/nodeFonts.ts). */
+export const BUILTIN_FONTS = Object.entries(BUNDLED_FONTS).map(([id, file]) => ({ id, file, name: NAMES[id] ?? id }))
 
 export interface BuiltinFont {
   id: string
@@ -23,15 +21,14 @@ export interface BuiltinFont {
 
 const cache = new Map<string, BuiltinFont>()
 
-/** A built-in font, parsed once per process; undefined for other ids. */
+/** A built-in font with its bytes and parsed entry (parsed once per process); undefined for other ids. */
 export function builtinFont(id: string): BuiltinFont | undefined {
   const known = BUILTIN_FONTS.find((f) => f.id === id)
   if (!known) return undefined
   let f = cache.get(id)
   if (!f) {
     const bytes = readFileSync(path.join(FONTS_DIR, known.file))
-    const entry = loadFont(id, bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength) as ArrayBuffer)
-    f = { ...known, bytes, sha256: createHash('sha256').update(bytes).digest('hex'), entry }
+    f = { ...known, bytes, sha256: createHash('sha256').update(bytes).digest('hex'), entry: nodeFontRegistry().get(id)! }
     cache.set(id, f)
   }
   return f

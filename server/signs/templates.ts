@@ -12,8 +12,13 @@ export const b612Measure: LineMeasure = (line, tracking) => {
   const font = builtinFont(B612_ID)!.entry
   const iHeight = font.profile.iHeight
   const l = layoutLine(font, line, tracking * iHeight)
-  const right = Math.max(l.advance, Number.isFinite(l.inkMaxX) ? l.inkMaxX : 0)
-  return { width: right / iHeight, descent: Number.isFinite(l.inkMinY) ? Math.max(0, -l.inkMinY) / iHeight : 0 }
+  const inked = Number.isFinite(l.inkMinX)
+  return {
+    width: l.advance / iHeight,
+    descent: inked ? Math.max(0, -l.inkMinY) / iHeight : 0,
+    inkLeft: inked ? l.inkMinX / iHeight : 0,
+    inkRight: inked ? l.inkMaxX / iHeight : l.advance / iHeight,
+  }
 }
 
 /** Build a new sign's layout from a template with real metrics and Grade 2 braille filled in. */

@@ -22,14 +22,14 @@ export const T = {
     /** Grid the braille position snaps up to (1/64 in). */
     fine: 1 / 64,
     /** §703.2.7: 1/8 in min between raised characters; this extra advance keeps B612 clear of it. */
-    tracking: 0.06,
+    tracking: 0.07,
     /** Default single door leaf (common 36 in door, no source). */
     leafWidth: 36,
     /** Latch-side offset from the door opening to the plate's near edge (common practice, no source). */
     offsetFromDoor: 3,
     /** Pictogram field height: §703.6.1 asks 6 in min. */
     pictogramField: 6,
-    /** Hoistway jamb characters: §407.2.3.1 asks 2 in min. */
+    /** Hoistway jamb characters: §407.2.3.1 asks 2 in min; read with §703.2.5 (2 in max) exactly 2 in. */
     jambCharacterHeight: 2,
     /** Hoistway jamb: lowest baseline well inside §703.4.1's 48–60 in band (common practice: near 60 in, no source). */
     jambBaselineAff: 56,
@@ -40,7 +40,7 @@ export const T = {
     lowestBaselineAff: 1225,
     plateStep: 5,
     fine: 0.1,
-    tracking: 1.6,
+    tracking: 1.8,
     leafWidth: 915,
     offsetFromDoor: 75,
     pictogramField: 152,
@@ -61,10 +61,10 @@ export const clean = (v: number) => Math.round(v * 1e6) / 1e6
  * per character (measured on "EXAM ROOM 104"); 0.95 leaves room. Round letters overshoot the
  * baseline by about 1.5 % of the I height; 3 % leaves room.
  */
-export const estimateLine: LineMeasure = (line, tracking) => ({
-  width: Array.from(line).length * (0.95 + tracking) - tracking,
-  descent: 0.03,
-})
+export const estimateLine: LineMeasure = (line, tracking) => {
+  const width = Array.from(line).length * (0.95 + tracking) - tracking
+  return { width, descent: 0.03, inkLeft: 0.05, inkRight: width - 0.05 }
+}
 
 /** Raised characters are uppercase (§703.2.3 allows either case, but signs use uppercase); blank lines are dropped. */
 export function signLines(text: string, fallback: string): string[] {
@@ -94,18 +94,36 @@ export function brailleCells(text: RaisedText, braille: Braille, translate: Temp
   return { generated: { prepared: t.prepared, unicode }, cells: Array.from(unicode).length }
 }
 
-/** Measure a raised-text block: width of the widest line and the ink below the last baseline. */
-export function measureBlock(text: RaisedText, measure: LineMeasure | undefined): { width: number; descent: number } {
+/**
+ * Measure a raised-text block where it stands: the widest advance, the ink below the last
+ * baseline, and the ink's left and right edges in plate coordinates (lines placed per `align`
+ * as the engine places them: left edge, centre or right edge of the advance at `position.x`).
+ */
+export function measureBlock(text: RaisedText, measure: LineMeasure | undefined): { width: number; descent: number; inkMinX: number; inkMaxX: number } {
   const m = measure ?? estimateLine
   const tracking = text.tracking / text.capHeight
   let width = 0
   let descent = 0
+  let inkMinX = Infinity
+  let inkMaxX = -Infinity
   for (const line of text.lines) {
     const r = m(line, tracking)
-    width = Math.max(width, r.width * text.capHeight)
+    const w = r.width * text.capHeight
+    const origin = text.align === 'left' ? text.position.x : text.align === 'center' ? text.position.x - w / 2 : text.position.x - w
+    width = Math.max(width, w)
     descent = Math.max(descent, r.descent * text.capHeight)
+    inkMinX = Math.min(inkMinX, origin + r.inkLeft * text.capHeight)
+    inkMaxX = Math.max(inkMaxX, origin + r.inkRight * text.capHeight)
   }
-  return { width, descent }
+  return { width, descent, inkMinX, inkMaxX }
+}
+
+/**
+ * Where braille's `position.x` goes so it is flush left with the text's ink (align 'left') or
+ * centred under it (align 'center'), as CBC 11B-703.3.2 asks and the engine measures.
+ */
+export function brailleXFor(align: Braille['align'], ink: { inkMinX: number; inkMaxX: number }, step: number): number {
+  return roundTo(align === 'left' ? ink.inkMinX : (ink.inkMinX + ink.inkMaxX) / 2, step / 4)
 }
 
 /** Baseline of the last line of a raised-text block (plate coordinates). */
@@ -122,14 +140,24 @@ export function templateText(units: Units, id: string, lines: string[], capHeigh
  * deepest ink below the last baseline plus 3/8 in, rounded up to a fine grid.
  */
 export function placeBrailleBelow(units: Units, text: RaisedText, descent: number, id: string, align: Braille['align'], x: number): Braille {
-  const y = ceilTo(lastBaseline(text) + descent + T[units].brailleBelowText, T[units].fine)
+  // The engine measures from the dot circles to the flattened outlines and counts the flattening
+  // error against the gap, so a gap of exactly 3/8 in can read 0.374 in: keep a hair of slack.
+  const slack = units === 'in' ? 0.002 : 0.05
+  const y = ceilTo(lastBaseline(text) + descent + T[units].brailleBelowText + slack, T[units].fine)
   return { ...createBraille(units, id, text.id, { x, y }), align }
 }
 
-/** Plate bottom height that puts the lowest tactile baseline at `baselineAff` (§703.4.1). */
-export function mountingHeightFor(units: Units, plateHeight: number, lowestBaselineY: number, baselineAff: number): number {
-  return roundTo(baselineAff - (plateHeight - lowestBaselineY), T[units].fine)
+/**
+ * Plate bottom height that puts `lowestY` (plate coordinates) at `aff` above the floor. Templates
+ * pass the bottom of the braille dots: A117.1 and CBC 11B hold the braille baseline to the 48 in
+ * minimum too (§703.4.1 in ADA holds only the raised characters), so this meets all three.
+ */
+export function mountingHeightFor(units: Units, plateHeight: number, lowestY: number, aff: number): number {
+  return ceilTo(aff - (plateHeight - lowestY), T[units].fine)
 }
+
+/** Bottom edge of a braille element's dots (one line of cells). */
+export const brailleBottom = (b: Braille) => b.position.y + brailleHeight(b.dots)
 
 /** An empty layout named and typed, with our plate defaults. */
 export function baseLayout(units: Units, name: string, signType: LayoutDocument['installation']['signType']): LayoutDocument {

@@ -1,6 +1,6 @@
 import { LAYOUT_DEFAULTS, type LayoutDocument, type PictogramField, type Units } from '../schema/layout'
 import type { PictogramId } from '../schema/api/signs'
-import { baseLayout, brailleCells, brailleHeight, brailleWidth, ceilTo, lastBaseline, latchSideDoor, measureBlock, mountingHeightFor, placeBrailleBelow, signLines, T, templateText } from './common'
+import { baseLayout, brailleBottom, brailleCells, brailleHeight, brailleWidth, brailleXFor, ceilTo, latchSideDoor, measureBlock, mountingHeightFor, placeBrailleBelow, signLines, T, templateText } from './common'
 import type { SignTemplate, TemplateOptions } from './types'
 
 /** The pictogram a restroom's words suggest. */
@@ -29,7 +29,7 @@ function build(text: string, units: Units, opts: TemplateOptions = {}): LayoutDo
   const width = ceilTo(Math.max(field, block.width, brailleWidth(cells, braille.dots)) + 2 * u.margin, u.plateStep)
   const cx = width / 2
   raised.position.x = cx
-  braille.position.x = cx
+  braille.position.x = brailleXFor('center', measureBlock(raised, opts.measure), u.fine)
   const pictogram: PictogramField = {
     kind: 'pictogram-field',
     id: 'pictogram',
@@ -45,7 +45,7 @@ function build(text: string, units: Units, opts: TemplateOptions = {}): LayoutDo
   doc.installation = {
     ...doc.installation,
     ...latchSideDoor(units),
-    mountingHeight: mountingHeightFor(units, doc.plate.height, lastBaseline(raised), u.lowestBaselineAff),
+    mountingHeight: mountingHeightFor(units, doc.plate.height, brailleBottom(braille), u.lowestBaselineAff),
   }
   return doc
 }

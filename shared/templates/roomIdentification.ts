@@ -1,12 +1,12 @@
 import { LAYOUT_DEFAULTS, type LayoutDocument, type SignType, type Units } from '../schema/layout'
 import type { TemplateId } from '../schema/api/signs'
-import { baseLayout, brailleCells, brailleHeight, brailleWidth, ceilTo, lastBaseline, latchSideDoor, measureBlock, mountingHeightFor, placeBrailleBelow, signLines, T, templateText } from './common'
+import { baseLayout, brailleBottom, brailleCells, brailleHeight, brailleWidth, brailleXFor, ceilTo, latchSideDoor, measureBlock, mountingHeightFor, placeBrailleBelow, signLines, T, templateText } from './common'
 import type { SignTemplate, TemplateOptions } from './types'
 
 /**
  * Raised text top-left, braille directly below it at the minimum clearance, both left-aligned
  * (§703.3.2), the plate cut to the content plus a margin, hung on the latch side of a single door
- * with the lowest baseline just above 48 in AFF (§703.4.1).
+ * with the braille (the lowest tactile line) just above 48 in AFF (§703.4.1).
  */
 export function buildTextAndBraille(signType: SignType, text: string, fallback: string, units: Units, opts: TemplateOptions = {}): LayoutDocument {
   const u = T[units]
@@ -15,7 +15,7 @@ export function buildTextAndBraille(signType: SignType, text: string, fallback: 
   const raised = templateText(units, 'text', lines, LAYOUT_DEFAULTS[units].capHeight, 'left')
   raised.position = { x: u.margin, y: u.margin }
   const block = measureBlock(raised, opts.measure)
-  const braille = placeBrailleBelow(units, raised, block.descent, 'braille', 'left', u.margin)
+  const braille = placeBrailleBelow(units, raised, block.descent, 'braille', 'left', brailleXFor('left', block, u.fine))
   const { generated, cells } = brailleCells(raised, braille, opts.translate)
   braille.generated = generated
   doc.plate.width = ceilTo(Math.max(block.width, brailleWidth(cells, braille.dots)) + 2 * u.margin, u.plateStep)
@@ -24,7 +24,7 @@ export function buildTextAndBraille(signType: SignType, text: string, fallback: 
   doc.installation = {
     ...doc.installation,
     ...latchSideDoor(units),
-    mountingHeight: mountingHeightFor(units, doc.plate.height, lastBaseline(raised), u.lowestBaselineAff),
+    mountingHeight: mountingHeightFor(units, doc.plate.height, brailleBottom(braille), u.lowestBaselineAff),
   }
   return doc
 }

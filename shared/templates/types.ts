@@ -5,10 +5,11 @@ import type { PictogramId, TemplateId } from '../schema/api/signs'
 /**
  * Measures one line of text in the template's font (B612), in multiples of the character
  * height (uppercase I): `width` is the advance width, `descent` how far ink reaches below the
- * baseline (round letters overshoot it). `tracking` is the extra advance between characters,
- * also in multiples of the character height.
+ * baseline (round letters overshoot it), `inkLeft` / `inkRight` where the ink starts and ends
+ * measured from the pen origin. `tracking` is the extra advance between characters, also in
+ * multiples of the character height.
  */
-export type LineMeasure = (line: string, tracking: number) => { width: number; descent: number }
+export type LineMeasure = (line: string, tracking: number) => { width: number; descent: number; inkLeft: number; inkRight: number }
 
 export interface TemplateOptions {
   /** Real font metrics; without it a conservative estimate sizes the plate. */

@@ -61,7 +61,7 @@ describe('fonts: happy path', () => {
     expect(font.suitability['ada-2010'].raised.checks.map((x: any) => x.section)).toEqual(['703.2.6', '703.2.4', '703.2.3'])
 
     const list = (await c.get('/api/fonts')).body.fonts
-    expect(list.map((f: any) => f.id)).toEqual(['b612', 'b612-bold', font.id])
+    expect(list.map((f: any) => f.id)).toEqual(['b612', 'b612-bold', 'b612-italic', font.id])
     expect(list[0]).toMatchObject({ builtin: true, format: 'woff', fileUrl: '/fonts/b612-latin-400-normal.woff' })
 
     const file = await fetch(`${c.base}${font.fileUrl}`, { headers: { Cookie: c.cookie } })
@@ -106,7 +106,7 @@ describe('fonts: happy path', () => {
     const { c } = await setup('FontDelete')
     const unused = (await upload(c, B612())).body.font
     expect((await c.delete(`/api/fonts/${unused.id}`)).status).toBe(204)
-    expect((await c.get('/api/fonts')).body.fonts.map((f: any) => f.id)).toEqual(['b612', 'b612-bold'])
+    expect((await c.get('/api/fonts')).body.fonts.map((f: any) => f.id)).toEqual(['b612', 'b612-bold', 'b612-italic'])
 
     const used = (await upload(c, repoFont('b612-latin-700-normal.woff'))).body.font
     const projectId = (await c.post('/api/projects', { name: 'P' })).body.project.id
@@ -190,7 +190,7 @@ describe('fonts: roles and organisations', () => {
     const other = await createTestOrg('FontOther')
     const intruder = srv.client()
     await intruder.signIn(other.email.admin)
-    expect((await intruder.get('/api/fonts')).body.fonts.map((f: any) => f.id)).toEqual(['b612', 'b612-bold'])
+    expect((await intruder.get('/api/fonts')).body.fonts.map((f: any) => f.id)).toEqual(['b612', 'b612-bold', 'b612-italic'])
     expect((await intruder.get(`/api/fonts/${font.id}/file`)).status).toBe(404)
     expect((await intruder.delete(`/api/fonts/${font.id}`)).status).toBe(404)
 
