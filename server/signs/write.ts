@@ -39,7 +39,7 @@ export function statusAfterEdit(status: SignStatus): SignStatus {
 }
 
 /** Insert revision `number` of a sign. */
-export async function insertRevision(tx: Transaction, args: { signId: string; number: number; document: LayoutDocument; authorId: string; restoredFrom?: number | null }) {
+export async function insertRevision(tx: Transaction, args: { signId: string; number: number; document: LayoutDocument; authorId: string | null; restoredFrom?: number | null }) {
   const hash = contentHash(args.document)
   await tx.insert(signRevisions).values({
     id: newId(),

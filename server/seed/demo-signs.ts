@@ -1,0 +1,120 @@
+import { and, eq } from 'drizzle-orm'
+import type { LayoutDocument, SignType } from '../../shared/schema/layout'
+import type { SignSchedule, TemplateId } from '../../shared/schema/api/signs'
+import { newId } from '../db/ids'
+import { projects, signs } from '../db/schema/index'
+import { checkDocument, checkSummary } from '../signs/check'
+import { buildSignLayout } from '../signs/templates'
+import { insertRevision } from '../signs/write'
+import type { SeedStep } from './types'
+
+/** One invented demo sign: the words, the template, the schedule row, and an optional planted fault. */
+interface DemoSign {
+  name: string
+  signType: SignType
+  templateId?: TemplateId
+  text: string
+  schedule: Partial<SignSchedule>
+  /** A deliberate fault, described for the demo (and the Lessons helper's reference). */
+  fault?: { what: string; apply(doc: LayoutDocument): LayoutDocument }
+}
+
+const edit = (doc: LayoutDocument, f: (d: LayoutDocument) => void) => {
+  const d = structuredClone(doc)
+  f(d)
+  return d
+}
+const braille = (d: LayoutDocument) => d.elements.find((e) => e.kind === 'braille')!
+const raised = (d: LayoutDocument) => d.elements.find((e) => e.kind === 'raised-text')!
+
+/** Harbor Point Community Clinic's signs (invented). Four carry planted faults. */
+export const DEMO_SIGNS: DemoSign[] = [
+  { name: 'Exam Room 101', signType: 'room-identification', text: 'Exam Room\n101', schedule: { roomNumber: '101', roomName: 'Exam Room', floor: '1' } },
+  { name: 'Exam Room 102', signType: 'room-identification', text: 'Exam Room\n102', schedule: { roomNumber: '102', roomName: 'Exam Room', floor: '1' } },
+  {
+    name: 'Exam Room 103',
+    signType: 'room-identification',
+    text: 'Exam Room\n103',
+    schedule: { roomNumber: '103', roomName: 'Exam Room', floor: '1', notes: 'Planted fault: braille too close to the text' },
+    fault: {
+      what: 'braille moved up to 1/4 in below the text (3/8 in minimum, §703.3.2)',
+      apply: (doc) => edit(doc, (d) => void (braille(d).position.y -= d.units === 'in' ? 0.14 : 3.5)),
+    },
+  },
+  { name: 'Exam Room 104', signType: 'room-identification', text: 'Exam Room\n104', schedule: { roomNumber: '104', roomName: 'Exam Room', floor: '1' } },
+  { name: 'Family Restroom 110', signType: 'restroom', text: 'Family\nRestroom', schedule: { roomNumber: '110', roomName: 'Family Restroom', floor: '1' } },
+  { name: 'Waiting Room 100', signType: 'room-identification', text: 'Waiting\nRoom', schedule: { roomNumber: '100', roomName: 'Waiting Room', floor: '1' } },
+  {
+    name: 'Records 120',
+    signType: 'room-identification',
+    text: 'Records',
+    schedule: { roomNumber: '120', roomName: 'Records', floor: '1', notes: 'Planted fault: mounted too high' },
+    fault: {
+      what: 'plate bottom raised to 59 1/2 in, putting the baseline above 60 in AFF (§703.4.1)',
+      apply: (doc) => edit(doc, (d) => void (d.installation.mountingHeight = d.units === 'in' ? 59.5 : 1510)),
+    },
+  },
+  {
+    name: 'Laboratory 130',
+    signType: 'room-identification',
+    text: 'Laboratory',
+    schedule: { roomNumber: '130', roomName: 'Laboratory', floor: '1', notes: 'Planted fault: italic raised characters' },
+    fault: {
+      what: 'raised characters set in B612 Italic (§703.2.3 forbids italic)',
+      apply: (doc) => edit(doc, (d) => void (raised(d).fontId = 'b612-italic')),
+    },
+  },
+  {
+    name: 'Staff Lounge 210',
+    signType: 'room-identification',
+    text: 'Staff Lounge',
+    schedule: { roomNumber: '210', roomName: 'Staff Lounge', floor: '2', notes: 'Planted fault: braille not regenerated after a text change' },
+    fault: {
+      what: 'text changed to STAFF ROOM after the braille was generated (§703.3: braille must match)',
+      apply: (doc) => edit(doc, (d) => void (raised(d).lines = ['STAFF ROOM'])),
+    },
+  },
+  { name: 'Exam Room 201', signType: 'room-identification', text: 'Exam Room\n201', schedule: { roomNumber: '201', roomName: 'Exam Room', floor: '2' } },
+  { name: 'Exit Stair A', signType: 'exit', text: 'Exit Stair A', schedule: { roomNumber: 'S1', roomName: 'Exit Stair A', floor: '1' } },
+  { name: 'Elevator Jamb Floor 1', signType: 'hoistway-jamb', text: '1', schedule: { roomNumber: 'E1', roomName: 'Elevator hoistway', floor: '1', quantity: 2, notes: 'Both jambs' } },
+  { name: 'Elevator Jamb Floor 2', signType: 'hoistway-jamb', text: '2', schedule: { roomNumber: 'E2', roomName: 'Elevator hoistway', floor: '2', quantity: 2, notes: 'Both jambs' } },
+  { name: 'Directional Exam Rooms', signType: 'directional', text: 'Exam Rooms\n101 to 104', schedule: { roomNumber: '', roomName: 'Corridor directional', floor: '1' } },
+]
+
+export const demoSignsStep: SeedStep = {
+  name: 'demo signs',
+  async run(ctx) {
+    const organisationId = ctx.ids.organisationId
+    const projectId = ctx.ids.projectId
+    if (!organisationId || !projectId) throw new Error('demo signs need the demo organisation and project steps first')
+    const [project] = await ctx.db.select().from(projects).where(eq(projects.id, projectId)).limit(1)
+    const authorId = ctx.ids.usersByEmail['designer@tidewater.example'] ?? null
+    let created = 0
+    for (const s of DEMO_SIGNS) {
+      const [existing] = await ctx.db.select({ id: signs.id }).from(signs).where(and(eq(signs.projectId, projectId), eq(signs.name, s.name))).limit(1)
+      if (existing) continue
+      let document = await buildSignLayout({ signType: s.signType, templateId: s.templateId, text: s.text, units: project!.unitSystem, name: s.name })
+      if (s.fault) document = s.fault.apply(document)
+      const report = await checkDocument(ctx.db, organisationId, document, project!.standardId)
+      const id = newId()
+      await ctx.db.transaction(async (tx) => {
+        await tx.insert(signs).values({
+          id,
+          organisationId,
+          projectId,
+          name: s.name,
+          signType: s.signType,
+          status: 'draft',
+          document,
+          currentRevision: 1,
+          schedule: { roomNumber: '', roomName: '', floor: '', quantity: 1, notes: '', ...s.schedule },
+          lastCheck: checkSummary(report, 1),
+          lastEditorId: authorId,
+        })
+        await insertRevision(tx, { signId: id, number: 1, document, authorId })
+      })
+      created++
+    }
+    ctx.log(`demo signs: ${created} created, ${DEMO_SIGNS.length - created} kept`)
+  },
+}
