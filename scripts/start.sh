@@ -24,7 +24,7 @@ if [ -f "$TP_DATA/maildev.pid" ] && kill -0 "$(cat "$TP_DATA/maildev.pid")" 2>/d
   tp_log "fake mail service already running"
 else
   if tp_port_in_use "$MAIL_SMTP_PORT"; then tp_log "port $MAIL_SMTP_PORT is taken; cannot start the fake mail service"; exit 1; fi
-  setsid nohup node node_modules/maildev/bin/maildev --ip 127.0.0.1 --web-ip 127.0.0.1 \
+  setsid nohup node node_modules/maildev/dist/bin/maildev.js --ip 127.0.0.1 --web-ip 127.0.0.1 \
     --smtp "$MAIL_SMTP_PORT" --web "$MAIL_WEB_PORT" --silent >"$TP_DATA/maildev.log" 2>&1 </dev/null &
   echo $! > "$TP_DATA/maildev.pid"
 fi

@@ -11,13 +11,21 @@ const ink = {
   600: '#2f4d85', 700: '#263f6d', 800: '#21355a', 900: '#1d2d4b', 950: '#121c31',
 }
 const slate = {
-  0: '#ffffff', 50: '#f6f8fb', 100: '#eceff5', 200: '#dce2ec', 300: '#c3ccda', 400: '#97a3b8', 500: '#6b7890',
+  0: '#ffffff', 50: '#f6f8fb', 100: '#eceff5', 200: '#dce2ec', 300: '#c3ccda', 400: '#97a3b8', 500: '#5d6980',
   600: '#505c73', 700: '#3d475b', 800: '#2b3344', 900: '#1c2230', 950: '#11151e',
 }
 /** The one warm signal colour: used for "Fails" and destructive actions only. */
 export const signal = {
-  50: '#fdf3ee', 100: '#fbe2d6', 200: '#f5c0a8', 300: '#ec9570', 400: '#e06a3f', 500: '#c94f22',
+  50: '#fdf3ee', 100: '#fbe2d6', 200: '#f5c0a8', 300: '#ec9570', 400: '#e06a3f', 500: '#b0421a',
   600: '#a8401a', 700: '#873417', 800: '#6c2b15', 900: '#582513', 950: '#30110a',
+}
+
+/** Message and toast text one step darker than the base theme's, for AA contrast on tinted backgrounds. */
+const severityText = (palette: string) => ({ color: `{${palette}.800}`, outlined: { color: `{${palette}.800}` }, simple: { color: `{${palette}.800}` } })
+const darkerSeverityText = {
+  colorScheme: {
+    light: { info: severityText('blue'), success: severityText('green'), warn: severityText('yellow'), error: severityText('red'), secondary: severityText('surface') },
+  },
 }
 
 export const TouchproofPreset = definePreset(Aura, {
@@ -38,5 +46,9 @@ export const TouchproofPreset = definePreset(Aura, {
         formField: { borderColor: '{surface.400}', hoverBorderColor: '{primary.500}', placeholderColor: '{surface.600}' },
       },
     },
+  },
+  components: {
+    message: darkerSeverityText,
+    toast: { colorScheme: { light: { info: { color: '{blue.800}', detailColor: '{surface.800}' }, success: { color: '{green.800}', detailColor: '{surface.800}' }, warn: { color: '{yellow.800}', detailColor: '{surface.800}' }, error: { color: '{red.800}', detailColor: '{surface.800}' } } } },
   },
 })

@@ -8,6 +8,7 @@ test('admin invites by e-mail; the invitee follows the mailed link, sets a passw
   await expect(page.getByRole('heading', { level: 1, name: 'Users' })).toBeVisible()
   await page.getByRole('button', { name: 'Invite user' }).click()
   const dialog = page.getByRole('dialog', { name: 'Invite a user' })
+  await expect(dialog.getByLabel('E-mail')).toBeFocused()
   await dialog.getByLabel('E-mail').fill(email)
   await dialog.getByLabel('Name').fill('Morgan Newcomer')
   await dialog.getByRole('combobox', { name: 'Role' }).click()

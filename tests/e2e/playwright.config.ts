@@ -23,8 +23,8 @@ export default defineConfig({
   fullyParallel: false,
   workers: 1, // 2 cores shared with the app server and MariaDB
   retries: 0,
-  timeout: 30_000,
-  expect: { timeout: 7_000 },
+  timeout: 90_000, // generous: the 2 shared cores are often busy
+  expect: { timeout: 15_000 },
   forbidOnly: !!process.env.CI,
   use: {
     baseURL,

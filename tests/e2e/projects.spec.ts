@@ -11,6 +11,8 @@ test('designer signs in, creates, renames and deletes a project, then signs out'
   const name = `Quayside Library ${Date.now()}`
   await page.getByRole('button', { name: 'New project' }).click()
   const dialog = page.getByRole('dialog', { name: 'New project' })
+  // The dialog moves focus to its first field once open; type only after that.
+  await expect(dialog.getByLabel('Project name')).toBeFocused()
   await dialog.getByLabel('Project name').fill(name)
   await dialog.getByLabel('Address').fill('9 Ferry Lane (invented)')
   await dialog.getByRole('combobox', { name: 'Units' }).click()
@@ -30,6 +32,7 @@ test('designer signs in, creates, renames and deletes a project, then signs out'
   const renamed = `${name} (East)`
   await row.getByRole('button', { name: `Rename ${name}` }).click()
   const rename = page.getByRole('dialog', { name: 'Rename project' })
+  await expect(rename.getByLabel('Project name')).toBeFocused()
   await expect(rename.getByLabel('Project name')).toHaveValue(name)
   await rename.getByLabel('Project name').fill(renamed)
   await rename.getByRole('button', { name: 'Save name' }).click()
