@@ -58,13 +58,13 @@ function ratioRule(opts: {
 
 /** §703.5.4: O width 55–110 % of I height. */
 export const visualProportion = ratioRule({
-  id: 'visual.proportion', section: '703.5.4', title: 'Visual character proportions', key: 'visual.proportion', what: 'uppercase O width is',
-  measure: (t) => (Number.isFinite(t.font.profile.oRatio) ? [{ value: t.font.profile.oRatio * 100, detail: `of the uppercase I height, font ${t.font.profile.family}` }] : null),
+  id: 'visual.proportion', section: '703.5.4', title: 'Visual character proportions', key: 'visual.proportion', what: 'uppercase O width as a share of the I height is',
+  measure: (t) => (Number.isFinite(t.font.profile.oRatio) ? [{ value: t.font.profile.oRatio * 100, detail: `font ${t.font.profile.family}` }] : null),
 })
 
 /** §703.5.7: stroke 10–30 % (CBC: also applies to raised characters used as visual, 10–20 % stricter reading). */
 export const visualStroke = ratioRule({
-  id: 'visual.stroke', section: '703.5.7', title: 'Visual stroke thickness', key: 'visual.stroke', what: 'stroke is',
+  id: 'visual.stroke', section: '703.5.7', title: 'Visual stroke thickness', key: 'visual.stroke', what: 'stroke as a share of the I height is',
   measure: (t, { units }) => {
     const h = t.element.capHeight
     const narrow = Math.min(t.strokeBase, t.strokeTop)
@@ -77,11 +77,11 @@ export const visualStroke = ratioRule({
 
 /** §703.5.8: spacing 10–35 % of the character height, closest points, word spaces excluded. */
 export const visualSpacing = ratioRule({
-  id: 'visual.spacing', section: '703.5.8', title: 'Visual character spacing', key: 'visual.spacing', what: 'spacing is',
+  id: 'visual.spacing', section: '703.5.8', title: 'Visual character spacing', key: 'visual.spacing', what: 'spacing as a share of the character height is',
   measure: (t, { units }) =>
     t.pairs.map((p) => ({
       value: (p.gap / t.element.capHeight) * 100,
-      detail: `"${p.chars}", ${fmt(p.gap, units)} of the character height`,
+      detail: `"${p.chars}": closest points ${fmt(p.gap, units)} apart`,
       box: boxOf({ minX: Math.min(p.a.x, p.b.x), minY: Math.min(p.a.y, p.b.y), maxX: Math.max(p.a.x, p.b.x), maxY: Math.max(p.a.y, p.b.y) }),
       dimension: { from: p.a, to: p.b, label: fmt(p.gap, units) },
     })),
@@ -89,13 +89,13 @@ export const visualSpacing = ratioRule({
 
 /** §703.5.9: line spacing 135–170 %. */
 export const visualLineSpacing = ratioRule({
-  id: 'visual.line-spacing', section: '703.5.9', title: 'Visual line spacing', key: 'visual.line-spacing', what: 'baselines are',
+  id: 'visual.line-spacing', section: '703.5.9', title: 'Visual line spacing', key: 'visual.line-spacing', what: 'baseline to baseline as a share of the character height is',
   measure: (t, { units }) => {
     if (t.lines.length < 2) return null
     const out = []
     for (let i = 1; i < t.lines.length; i++) {
       const d = t.lines[i].baselineY - t.lines[i - 1].baselineY
-      out.push({ value: (d / t.element.capHeight) * 100, detail: `${fmt(d, units)} apart, of the character height` })
+      out.push({ value: (d / t.element.capHeight) * 100, detail: `${fmt(d, units)} apart` })
     }
     return out
   },
