@@ -90,23 +90,29 @@ export function measureDotPitches(block: BrailleBlock): { spacing: number; cellP
   let spacing = NaN
   let cellPitch = NaN
   let linePitch = NaN
-  const key = (d: DotCentre) => `${d.line}:${d.cell}:${d.dot}`
-  const byKey = new Map(block.dots.map((d) => [key(d), d]))
-  for (const d of block.dots) {
+  // Dots arrive grouped by line and cell, in dot order (see layoutBrailleCells).
+  const last: Array<DotCentre | undefined> = new Array(9)
+  const firstLineY: Array<{ line: number; y: number } | undefined> = new Array(9)
+  const dots = block.dots
+  let cellStart = 0
+  for (let i = 0; i < dots.length; i++) {
+    const d = dots[i]
+    if (i > 0 && (dots[i - 1].cell !== d.cell || dots[i - 1].line !== d.line)) cellStart = i
     if (Number.isNaN(spacing)) {
-      const below = d.dot === 1 || d.dot === 2 || d.dot === 4 || d.dot === 5 ? byKey.get(`${d.line}:${d.cell}:${d.dot + 1}`) : undefined
-      const right = d.dot <= 3 ? byKey.get(`${d.line}:${d.cell}:${d.dot + 3}`) : undefined
-      const o = below ?? right
-      if (o) spacing = Math.hypot(o.x - d.x, o.y - d.y)
+      for (let j = cellStart; j < i; j++) {
+        const o = dots[j]
+        const vertical = d.dot === o.dot + 1 && (o.dot === 1 || o.dot === 2 || o.dot === 4 || o.dot === 5)
+        const horizontal = d.dot === o.dot + 3 && o.dot <= 3
+        if (vertical || horizontal) { spacing = Math.hypot(d.x - o.x, d.y - o.y); break }
+      }
     }
-    if (Number.isNaN(cellPitch)) {
-      const next = byKey.get(`${d.line}:${d.cell + 1}:${d.dot}`)
-      if (next) cellPitch = next.x - d.x
-    }
-    if (Number.isNaN(linePitch)) {
-      const down = block.dots.find((o) => o.line === d.line + 1 && o.dot === d.dot)
-      if (down) linePitch = down.y - d.y
-    }
+    const prev = last[d.dot]
+    if (Number.isNaN(cellPitch) && prev && prev.line === d.line && prev.cell === d.cell - 1) cellPitch = d.x - prev.x
+    const f = firstLineY[d.dot]
+    if (Number.isNaN(linePitch) && f && f.line === d.line - 1) linePitch = d.y - f.y
+    if (!f || f.line !== d.line) firstLineY[d.dot] = { line: d.line, y: d.y }
+    last[d.dot] = d
+    if (!Number.isNaN(spacing) && !Number.isNaN(cellPitch) && !Number.isNaN(linePitch)) break
   }
   return { spacing, cellPitch, linePitch }
 }
