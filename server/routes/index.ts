@@ -24,6 +24,12 @@ import { deleteFontRoute } from './fonts-delete'
 import { fontFileRoute } from './fonts-file'
 import { listFontsRoute } from './fonts-list'
 import { uploadFontRoute } from './fonts-upload'
+import { createCommentRoute } from './reviews-comment-create'
+import { reviewQueueRoute } from './reviews-queue'
+import { returnSignRoute } from './reviews-return'
+import { signOffRoute } from './reviews-sign-off'
+import { signReviewStateRoute } from './reviews-sign-state'
+import { submitForReviewRoute } from './reviews-submit'
 import { inviteUserRoute } from './users-invite'
 import { listUsersRoute } from './users-list'
 import { updateUserRoute } from './users-update'
@@ -57,6 +63,13 @@ export const routes: readonly AnyRoute[] = [
   listRevisionsRoute,
   getRevisionRoute,
   restoreRevisionRoute,
+  // review and sign-off
+  submitForReviewRoute,
+  reviewQueueRoute,
+  signReviewStateRoute,
+  createCommentRoute,
+  returnSignRoute,
+  signOffRoute,
   // fonts
   listFontsRoute,
   uploadFontRoute,

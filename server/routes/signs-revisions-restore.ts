@@ -25,7 +25,7 @@ export const restoreRevisionRoute = defineRoute({
     const row = await deps.db.transaction(async (tx) => {
       const { sign, revision } = await loadRevision(tx, user.organisationId, params.id, params.number)
       if (sign.version !== body.version) throw staleSign(body.version, sign)
-      const { revision: number, hash } = await updateSignRow(tx, sign, {
+      const { revision: number, hash, status } = await updateSignRow(tx, sign, {
         organisationId: user.organisationId,
         userId: user.id,
         version: body.version,
@@ -33,7 +33,10 @@ export const restoreRevisionRoute = defineRoute({
         document: readDocument(revision.document),
         restoredFrom: revision.number,
       })
-      await audit(tx, { organisationId: user.organisationId, actorUserId: user.id, action: 'sign.restore', subjectType: 'sign', subjectId: sign.id, details: { restoredFrom: revision.number, revision: number, contentHash: hash } })
+      await audit(tx, { organisationId: user.organisationId, actorUserId: user.id, action: 'sign.restore', subjectType: 'sign', subjectId: sign.id, details: { restoredFrom: revision.number, revision: number, contentHash: hash, ...(status !== sign.status ? { statusFrom: sign.status, statusTo: status } : {}) } })
+      if (sign.status === 'signed-off' && status === 'superseded') {
+        await audit(tx, { organisationId: user.organisationId, actorUserId: user.id, action: 'sign-off.superseded', subjectType: 'sign', subjectId: sign.id, details: { signedOffRevision: sign.currentRevision, newRevision: number } })
+      }
       return loadSign(tx, user.organisationId, sign.id)
     })
     res.json({ sign: signJson(row.sign, row.editorName) })

@@ -34,15 +34,18 @@ export const updateSignRoute = defineRoute({
       const changedDocument = next && contentHash(next) !== contentHash(current.document) ? next : undefined
       const changedFields = Object.fromEntries(Object.entries(changes).filter(([k, v]) => v !== undefined && v !== current[k as keyof typeof current]))
       if (!changedDocument && Object.keys(changedFields).length === 0) return null
-      const { revision, hash } = await updateSignRow(tx, current, { organisationId: user.organisationId, userId: user.id, version, changes: changedFields, document: changedDocument })
+      const { revision, hash, status } = await updateSignRow(tx, current, { organisationId: user.organisationId, userId: user.id, version, changes: changedFields, document: changedDocument })
       await audit(tx, {
         organisationId: user.organisationId,
         actorUserId: user.id,
         action: 'sign.update',
         subjectType: 'sign',
         subjectId: current.id,
-        details: { fromVersion: version, changes: changedFields, ...(revision ? { revision, contentHash: hash } : {}) },
+        details: { fromVersion: version, changes: changedFields, ...(revision ? { revision, contentHash: hash } : {}), ...(status !== current.status ? { statusFrom: current.status, statusTo: status } : {}) },
       })
+      if (current.status === 'signed-off' && status === 'superseded') {
+        await audit(tx, { organisationId: user.organisationId, actorUserId: user.id, action: 'sign-off.superseded', subjectType: 'sign', subjectId: current.id, details: { signedOffRevision: current.currentRevision, newRevision: revision } })
+      }
       return loadSign(tx, user.organisationId, params.id)
     })
     const result = row ?? (await loadSign(deps.db, user.organisationId, params.id))

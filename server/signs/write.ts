@@ -5,7 +5,7 @@ import { LAYOUT_MAX_BYTES, type LayoutDocument } from '../../shared/schema/layou
 import type { SignStatus } from '../../shared/schema/api/signs'
 import type { Transaction } from '../db/client'
 import { newId } from '../db/ids'
-import { signRevisions, signs, type SignRow } from '../db/schema/index'
+import { signReviews, signRevisions, signs, type SignRow } from '../db/schema/index'
 import { AppError, conflict } from '../errors'
 
 /** Room for the rest of the body around a document of the maximum size. */
@@ -61,10 +61,11 @@ export async function insertRevision(tx: Transaction, args: { signId: string; nu
 export async function updateSignRow(
   tx: Transaction,
   current: SignRow,
-  args: { organisationId: string; userId: string; version: number; changes: Partial<Pick<SignRow, 'name' | 'signType' | 'status'>>; document?: LayoutDocument; restoredFrom?: number },
-): Promise<{ revision: number | null; hash: string | null }> {
+  args: { organisationId: string; userId: string; version: number; changes: Partial<Pick<SignRow, 'name' | 'signType' | 'status'>>; document?: LayoutDocument; restoredFrom?: number; statusOnly?: boolean },
+): Promise<{ revision: number | null; hash: string | null; status: SignStatus }> {
   const revision = args.document ? current.currentRevision + 1 : null
-  const set: Record<string, unknown> = { ...args.changes, lastEditorId: args.userId, version: sql`${signs.version} + 1` }
+  // Review steps change only the status: the last editor stays the person who edited the layout.
+  const set: Record<string, unknown> = { ...args.changes, ...(args.statusOnly ? {} : { lastEditorId: args.userId }), version: sql`${signs.version} + 1` }
   if (args.document) {
     set.document = args.document
     set.currentRevision = revision
@@ -76,8 +77,15 @@ export async function updateSignRow(
     .where(and(eq(signs.id, current.id), eq(signs.organisationId, args.organisationId), eq(signs.version, args.version)))
   // mysql2 reports matched rows, so 0 means the version moved on (or the row vanished).
   if (result[0].affectedRows !== 1) throw staleSign(args.version, current)
+  if (args.document && current.status === 'in-review') {
+    // The reviewer was looking at the previous revision: that submission is withdrawn.
+    await tx
+      .update(signReviews)
+      .set({ state: 'withdrawn', closedBy: args.userId, closedAt: new Date(), decisionNote: `Withdrawn: revision ${revision} was saved while in review` })
+      .where(and(eq(signReviews.signId, current.id), eq(signReviews.state, 'open')))
+  }
   const hash = args.document ? await insertRevision(tx, { signId: current.id, number: revision!, document: args.document, authorId: args.userId, restoredFrom: args.restoredFrom }) : null
-  return { revision, hash }
+  return { revision, hash, status: (set.status as SignStatus | undefined) ?? current.status }
 }
 
 /** The 409 a stale write gets. */
