@@ -91,10 +91,13 @@ test('room sign: braille follows the text, a dragged braille fails 703.3.2 live,
   await page.getByTestId('editor-stage').focus()
   await page.keyboard.press('Control+z')
   await expect(separation).toHaveAttribute('data-status', 'meets', { timeout: 1000 })
+  const measuredAfterUndo = (await separation.getByTestId('finding-measured').textContent())!
 
   // Move the braille down with the keyboard to ~0.59 in: fine under ADA (no maximum), fails CBC 11B's 1/2 in maximum.
   await tree(page).getByRole('treeitem', { name: /Braille of/ }).click()
+  await page.getByTestId('editor-stage').focus()
   for (let i = 0; i < 6; i++) await page.keyboard.press('ArrowDown')
+  await expect(separation.getByTestId('finding-measured')).not.toHaveText(`${measuredAfterUndo}`)
   await expect(separation).toHaveAttribute('data-status', 'meets')
   await expect(finding(page, 'braille.separation-text-max')).toHaveCount(0)
   await page.getByTestId('standard-switcher').getByText('CBC 11B-2022').click()

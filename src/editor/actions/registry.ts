@@ -19,8 +19,10 @@ const isMac = typeof navigator !== 'undefined' && /Mac|iPhone|iPad/.test(navigat
 
 /** Whether a keyboard event matches a shortcut like "Mod+Shift+Z". */
 export function matchesShortcut(e: KeyboardEvent, shortcut: string): boolean {
-  const parts = shortcut.split('+')
-  const key = parts.pop()!
+  // "+" itself can be the key ("+", "Shift++"): split off the last key by hand.
+  const plusKey = shortcut === '+' || shortcut.endsWith('++')
+  const parts = (plusKey ? shortcut.slice(0, -1) : shortcut).split('+').filter(Boolean)
+  const key = plusKey ? '+' : parts.pop()!
   const want = { mod: parts.includes('Mod'), shift: parts.includes('Shift'), alt: parts.includes('Alt') }
   const mod = isMac ? e.metaKey : e.ctrlKey
   if (mod !== want.mod || e.altKey !== want.alt) return false
@@ -28,7 +30,7 @@ export function matchesShortcut(e: KeyboardEvent, shortcut: string): boolean {
   const printable = key.length === 1 && !/[a-z0-9]/i.test(key)
   if (!printable && e.shiftKey !== want.shift) return false
   const k = e.key.length === 1 ? e.key.toLowerCase() : e.key
-  if (k === key.toLowerCase()) return true
+  if (k.toLowerCase() === key.toLowerCase()) return true
   // Alt changes e.key on some layouts: fall back to the physical key for letters and digits.
   if (/^[a-z]$/i.test(key) && e.code === `Key${key.toUpperCase()}`) return true
   if (/^[0-9]$/.test(key) && e.code === `Digit${key}`) return true
