@@ -1,4 +1,5 @@
 import { meRoute } from './auth-me'
+import { checkRoute } from './check'
 import { passwordResetRequestRoute } from './auth-password-reset'
 import { setPasswordRoute } from './auth-set-password'
 import { signInRoute } from './auth-sign-in'
@@ -41,6 +42,8 @@ import { updateUserRoute } from './users-update'
  */
 export const routes: readonly AnyRoute[] = [
   healthRoute,
+  // rules engine
+  checkRoute,
   // auth
   signInRoute,
   signOutRoute,
