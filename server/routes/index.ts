@@ -31,9 +31,14 @@ import { returnSignRoute } from './reviews-return'
 import { signOffRoute } from './reviews-sign-off'
 import { signReviewStateRoute } from './reviews-sign-state'
 import { submitForReviewRoute } from './reviews-submit'
+import { scheduleExportRoute } from './schedule-export'
+import { scheduleImportRoute } from './schedule-import'
+import { schedulePreviewRoute } from './schedule-preview'
 import { inviteUserRoute } from './users-invite'
 import { listUsersRoute } from './users-list'
 import { updateUserRoute } from './users-update'
+import { projectReportRoute } from './reports-project'
+import { signReportRoute } from './reports-sign'
 
 /**
  * Every API route, in one list. Add a route: create `server/routes/<name>.ts` exporting a
@@ -66,6 +71,10 @@ export const routes: readonly AnyRoute[] = [
   listRevisionsRoute,
   getRevisionRoute,
   restoreRevisionRoute,
+  // schedule CSV
+  schedulePreviewRoute,
+  scheduleImportRoute,
+  scheduleExportRoute,
   // review and sign-off
   submitForReviewRoute,
   reviewQueueRoute,
@@ -84,4 +93,7 @@ export const routes: readonly AnyRoute[] = [
   updateUserRoute,
   // lessons, practice copies, progress
   ...lessonRoutes,
+  // PDF reports
+  signReportRoute,
+  projectReportRoute,
 ]
