@@ -4,6 +4,7 @@
  * glyph extents and character gaps as opentype.js, which the engine uses.
  */
 import { describe, expect, it } from 'vitest'
+// @ts-expect-error fontkit 2.0.4 ships no type declarations; the shape used is typed below.
 import * as fontkit from 'fontkit'
 import path from 'node:path'
 import { FONTS_DIR, readArrayBuffer } from '../../server/engine/nodeFonts'

@@ -44,9 +44,9 @@ describe('layout schema', () => {
   })
 
   it('migrates a version-0 document (no schemaVersion, no units, string override)', () => {
-    const d = createEmptyLayout('in') as Record<string, unknown>
-    const b = createBraille('in', 'b1', 't1', { x: 1, y: 2 }) as Record<string, unknown>
-    const v0 = {
+    const d = createEmptyLayout('in') as unknown as Record<string, unknown>
+    const b = createBraille('in', 'b1', 't1', { x: 1, y: 2 }) as unknown as Record<string, unknown>
+    const v0: Record<string, unknown> = {
       ...d,
       elements: [createRaisedText('in', 't1', ['A'], { x: 1, y: 1 }), { ...b, override: '⠁' }],
     }

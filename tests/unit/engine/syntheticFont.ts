@@ -3,8 +3,11 @@
  * glyphs are rectangles (no curves, so no flattening error), 1000 units per em,
  * uppercase I 1000 units high. At capHeight 1 in, 1 unit = 0.001 in.
  */
-// @ts-expect-error opentype's ESM build has no types; the project shim declares only `parse`.
-import * as ot from 'opentype.js/dist/opentype.mjs'
+import * as otModule from 'opentype.js/dist/opentype.mjs'
+
+// opentype's ESM build has no types; the project shim declares only `parse`.
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+const ot = otModule as any
 import { loadFont, type FontEntry } from '../../../shared/fonts/registry'
 
 type P = { moveTo(x: number, y: number): void; lineTo(x: number, y: number): void; close(): void }
