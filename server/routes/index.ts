@@ -34,6 +34,9 @@ import { submitForReviewRoute } from './reviews-submit'
 import { scheduleExportRoute } from './schedule-export'
 import { scheduleImportRoute } from './schedule-import'
 import { schedulePreviewRoute } from './schedule-preview'
+import { checkRunEventsRoute } from './check-runs-events'
+import { getCheckRunRoute } from './check-runs-get'
+import { startCheckRunRoute } from './check-runs-start'
 import { inviteUserRoute } from './users-invite'
 import { listUsersRoute } from './users-list'
 import { updateUserRoute } from './users-update'
@@ -75,6 +78,10 @@ export const routes: readonly AnyRoute[] = [
   schedulePreviewRoute,
   scheduleImportRoute,
   scheduleExportRoute,
+  // batch check
+  startCheckRunRoute,
+  getCheckRunRoute,
+  checkRunEventsRoute,
   // review and sign-off
   submitForReviewRoute,
   reviewQueueRoute,
