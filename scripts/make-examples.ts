@@ -61,9 +61,9 @@ const door = (d: LayoutDocument, patch: Partial<NonNullable<LayoutDocument['inst
 }
 {
   const d = createEmptyLayout('in', 'Directional — exam rooms, read across the waiting room')
-  d.plate.width = 16; d.plate.height = 4; d.plate.colour = '#1f3a5f'
-  d.installation.signType = 'directional'; d.installation.mountingHeight = 64; d.installation.viewingDistance = 120
-  d.elements.push({ kind: 'visual-text', id: 'v1', lines: ['EXAM ROOMS 101 TO 108'], fontId: 'b612', capHeight: 1.25, tracking: 0.04, lineSpacing: 1.9, align: 'left', position: { x: 0.75, y: 1.25 }, colour: '#ffffff' })
+  d.plate.width = 14; d.plate.height = 5.5; d.plate.colour = '#1f3a5f'
+  d.installation.signType = 'directional'; d.installation.mountingHeight = 62; d.installation.viewingDistance = 120
+  d.elements.push({ kind: 'visual-text', id: 'v1', lines: ['EXAM ROOMS', '101 TO 108'], fontId: 'b612', capHeight: 1.25, tracking: 0.04, lineSpacing: 1.9, align: 'left', position: { x: 0.75, y: 1 }, colour: '#ffffff' })
   out['directional-exam-rooms'] = d
 }
 {

@@ -1,6 +1,7 @@
 /** Every rule the engine runs, in report order. */
 import type { Rule } from './types'
 import { scopeSignType } from './rules/scope'
+import { elementsOnPlate } from './rules/onPlate'
 import { raisedFont } from './rules/raisedFont'
 import { raisedRelief } from './rules/raisedRelief'
 import { raisedCase } from './rules/raisedCase'
@@ -29,6 +30,7 @@ import { pictogramFieldHeight, pictogramFieldClear, pictogramDescriptor } from '
 
 export const RULES: readonly Rule[] = [
   scopeSignType,
+  elementsOnPlate,
   raisedFont,
   raisedRelief,
   raisedCase,

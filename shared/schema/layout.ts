@@ -358,6 +358,9 @@ export const LayoutDocumentSchema = z
       seen.set(el.id, i)
     })
     doc.elements.forEach((el, i) => {
+      if ((el.kind === 'raised-text' || el.kind === 'visual-text') && !el.lines.some((l) => l.trim() !== '')) {
+        ctx.addIssue({ code: 'custom', path: ['elements', i, 'lines'], message: 'needs at least one character' })
+      }
       if (el.kind === 'braille') {
         const target = doc.elements.find((e) => e.id === el.textId)
         if (!target || target.kind !== 'raised-text') {

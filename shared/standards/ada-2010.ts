@@ -135,6 +135,10 @@ const requirements: Record<RequirementKey, Requirement> = {
     limit: len(2, 2, 51, 51), sources: ['S27'], reliability: 'D',
     note: '2 in minimum is primary (407.2.3.1); read with 703.2.5 the characters are exactly 2 in.',
   },
+  'layout.on-plate': {
+    section: '703.1', title: 'Every element lies on the plate (it cannot be fabricated or read elsewhere)', limit: none, sources: ['S7'], reliability: 'D',
+    note: 'Derived: 703 applies to the sign as made; an element outside the plate is not on the sign.',
+  },
   'hoistway.colour': { section: '407.2.3.1', title: 'No colour requirement for hoistway signs in this standard', limit: none, sources: ['S27'], reliability: 'P' },
 }
 

@@ -77,6 +77,7 @@ export type RequirementKey =
   | 'pictogram.field-height' | 'pictogram.field-clear' | 'pictogram.descriptor'
   | 'contrast.lrv' | 'contrast.wcag'
   | 'hoistway.height' | 'hoistway.colour'
+  | 'layout.on-plate'
 
 /** A standard profile: every requirement resolved (base + overrides). */
 export interface StandardProfile {

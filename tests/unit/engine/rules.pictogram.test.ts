@@ -33,3 +33,12 @@ const cases: RuleCase[] = [
 describe('pictogram rules (table cases)', () => {
   for (const c of cases) it(`${c.section}: ${c.name}`, () => { runCase(c) })
 })
+
+describe('elements on the plate', () => {
+  const cases: RuleCase[] = [
+    { name: 'compliant base sign: everything on the plate', section: '703.1', source: 'D', rule: 'layout.on-plate', doc: () => {}, status: 'meets' },
+    { name: 'raised text running 1 in past the right edge fails', section: '703.1', source: 'D', rule: 'layout.on-plate', doc: (d) => { el(d, 't1', 'raised-text').position.x = 3 }, status: 'fails' },
+    { name: 'pictogram field hanging off the top fails', section: '703.1', source: 'D', rule: 'layout.on-plate', doc: (d) => { d.elements.push({ kind: 'pictogram-field', id: 'pf', box: { x: 1, y: -0.5, width: 6, height: 6 }, pictogram: { source: 'builtin', id: 'x' }, descriptorId: null, raised: false, colour: '#ffffff' }) }, status: 'fails', measured: 0.5 },
+  ]
+  for (const c of cases) it(`${c.section}: ${c.name}`, () => { runCase(c) })
+})
