@@ -79,6 +79,7 @@ export const RULE_LINKS: Readonly<Record<string, LessonLink>> = {
   'door.clear-floor': L('installation', 'the-clear-floor-square-and-the-door-swing'),
 
   'scope.sign-type': L('sign-types', 'signs-that-identify-rooms-and-spaces'),
+  'layout.on-plate': L('sign-types', 'signs-that-identify-rooms-and-spaces'),
   'scope.tactile': L('sign-types', 'signs-that-identify-rooms-and-spaces'),
   'scope.visual': L('sign-types', 'directional-and-informational-signs'),
   'hoistway.height': L('sign-types', 'elevator-hoistway-jamb-designations'),
