@@ -6,12 +6,15 @@ import type { Vec2 } from '../../geometry/types'
 /** Closest distance between a braille block's dot bases and a text's outlines. */
 export function brailleToText(b: BrailleMeasure, t: TextMeasure): { distance: number; a: Vec2; b: Vec2 } {
   const r = b.element.dots.diameter / 2
+  const dots = b.block.dots
+  // PERF: lower bound of each dot = distance from the dot to the text's ink box; visiting
+  // dots nearest-first lets the loop stop as soon as no remaining dot can be closer.
+  const lower = dots.map((d) => Math.hypot(Math.max(0, t.ink.minX - d.x, d.x - t.ink.maxX), Math.max(0, t.ink.minY - d.y, d.y - t.ink.maxY)) - r)
+  const order = dots.map((_, i) => i).sort((p, q) => lower[p] - lower[q])
   let best = { distance: Infinity, a: { x: NaN, y: NaN }, b: { x: NaN, y: NaN } }
-  for (const d of b.block.dots) {
-    // PERF: a dot farther from the text's ink box than the best so far cannot win.
-    const dx = Math.max(0, t.ink.minX - d.x, d.x - t.ink.maxX)
-    const dy = Math.max(0, t.ink.minY - d.y, d.y - t.ink.maxY)
-    if (Math.hypot(dx, dy) - r >= best.distance) continue
+  for (const i of order) {
+    if (lower[i] >= best.distance) break
+    const d = dots[i]
     const q = t.pointDistance(d.x, d.y)
     const dist = Math.max(0, q.distance - r)
     if (dist < best.distance) {

@@ -22,12 +22,25 @@ export const scopeSignType: Rule = {
   evaluate({ doc, m }) {
     const type = doc.installation.signType
     if (TACTILE.has(type)) {
-      const ok = m.raised.length > 0 || doc.elements.some((e) => e.kind === 'raised-text')
+      const raised = doc.elements.filter((e) => e.kind === 'raised-text')
+      const ok = raised.length > 0
+      // 216.2 and 216.4.1 also require visual characters (703.5): raised characters serving as
+      // visual ones, or a separate visual text.
+      const needsVisual = type === 'room-identification' || type === 'restroom' || type === 'exit'
+      const hasVisual = raised.some((e) => e.kind === 'raised-text' && e.servesAsVisual) || doc.elements.some((e) => e.kind === 'visual-text')
+      const visualOk = !needsVisual || hasVisual
       return [{
-        status: ok ? 'meets' : 'fails',
+        status: ok && visualOk ? 'meets' : 'fails',
         requirement: 'scope.tactile',
         elements: [],
-        data: { subject: `A ${type.replace(/-/g, ' ')} sign`, detail: ok ? 'carries raised characters with braille rules applied' : 'needs raised characters and braille, and this layout has no raised text' },
+        data: {
+          subject: `A ${type.replace(/-/g, ' ')} sign`,
+          detail: !ok
+            ? 'needs raised characters and braille, and this layout has no raised text'
+            : !visualOk
+              ? 'needs visual characters too (703.5): mark the raised text as serving as visual characters or add visual text'
+              : 'carries raised characters with braille rules applied',
+        },
       }]
     }
     const ok = m.visual.length > 0 || m.raised.length > 0

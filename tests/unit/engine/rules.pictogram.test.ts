@@ -42,3 +42,14 @@ describe('elements on the plate', () => {
   ]
   for (const c of cases) it(`${c.section}: ${c.name}`, () => { runCase(c) })
 })
+
+describe('scoping (§216)', () => {
+  const cases: RuleCase[] = [
+    { name: 'room sign with raised characters serving as visual ones meets', section: '216.2', source: 'S24', rule: 'scope.sign-type', doc: () => {}, status: 'meets' },
+    { name: 'room sign without raised text fails', section: '216.2', source: 'S24', rule: 'scope.sign-type', doc: (d) => { d.elements = [] }, status: 'fails' },
+    { name: 'room sign whose raised text is not visual, with no visual text, fails (703.5 required)', section: '216.2', source: 'S24', rule: 'scope.sign-type', doc: (d) => { el(d, 't1', 'raised-text').servesAsVisual = false }, status: 'fails' },
+    { name: 'directional sign: tactile rules are not applicable', section: '216.3', source: 'S7', rule: 'raised.height', doc: (d) => { d.installation.signType = 'directional' }, status: 'not-applicable' },
+    { name: 'directional sign with no visual characters fails', section: '216.3', source: 'S7', rule: 'scope.sign-type', requirement: 'scope.visual', doc: (d) => { d.installation.signType = 'directional'; d.elements = [] }, status: 'fails' },
+  ]
+  for (const c of cases) it(`${c.section}: ${c.name}`, () => { runCase(c) })
+})
