@@ -67,3 +67,20 @@ describe('rule registry', () => {
     expect(STANDARDS['a117-2017'].requirements['braille.dot-diameter'].section).toBe('Table 703.4.3')
   })
 })
+
+describe('unverified limits carry their note into findings', () => {
+  it('A117.1 raised height (M) carries the note; CBC stroke (P) does not; ADA height (P) does not', async () => {
+    const { baseSign, fonts } = await import('./support')
+    const { checkLayout } = await import('../../../shared/rules')
+    const find = (standard: 'ada-2010' | 'a117-2017' | 'cbc-11b-2022', rule: string) =>
+      checkLayout(baseSign(), { fonts, standard }).findings.find((f) => f.rule === rule)!
+    const a117 = find('a117-2017', 'raised.height')
+    expect(a117.reliability).toBe('M')
+    expect(a117.note).toMatch(/unverified/i)
+    expect(a117.section).toBe('703.3.5')
+    expect(find('cbc-11b-2022', 'raised.stroke').note).toBeUndefined()
+    expect(find('cbc-11b-2022', 'raised.stroke').section).toBe('11B-703.2.6')
+    expect(find('ada-2010', 'raised.height').note).toBeUndefined()
+    expect(find('ada-2010', 'raised.height').reliability).toBe('P')
+  })
+})
