@@ -37,6 +37,11 @@ import { schedulePreviewRoute } from './schedule-preview'
 import { checkRunEventsRoute } from './check-runs-events'
 import { getCheckRunRoute } from './check-runs-get'
 import { startCheckRunRoute } from './check-runs-start'
+import { createProofRoute } from './proofs-create'
+import { listProofsRoute } from './proofs-list'
+import { answerProofRoute } from './proofs-public-answer'
+import { publicProofRoute } from './proofs-public-get'
+import { revokeProofRoute } from './proofs-revoke'
 import { inviteUserRoute } from './users-invite'
 import { listUsersRoute } from './users-list'
 import { updateUserRoute } from './users-update'
@@ -89,6 +94,12 @@ export const routes: readonly AnyRoute[] = [
   createCommentRoute,
   returnSignRoute,
   signOffRoute,
+  // client proofs
+  createProofRoute,
+  listProofsRoute,
+  revokeProofRoute,
+  publicProofRoute,
+  answerProofRoute,
   // fonts
   listFontsRoute,
   uploadFontRoute,
