@@ -11,7 +11,7 @@ tp_ensure_debs mariadb-server chromium poppler-utils
 tp_ensure_node_modules
 tp_db_start
 
-RESULTS="$TP_DATA/test-results"
+RESULTS="$TP_DATA/test-results/npm-test"
 rm -rf "$RESULTS"; mkdir -p "$RESULTS"
 export TEST_DATABASE_URL="$(tp_db_url touchproof_test)"
 export E2E_DATABASE_URL="$(tp_db_url touchproof_e2e)"
@@ -33,7 +33,7 @@ if ! npx vite build --logLevel warn </dev/null; then build_failed=1; status=1; f
 
 tp_log "Playwright: end-to-end tests in Debian's Chromium"
 if [ "$build_failed" -eq 0 ]; then
-  PLAYWRIGHT_JSON_OUTPUT_NAME="$RESULTS/playwright.json" \
+  E2E_OUTPUT_DIR="$RESULTS/e2e" PLAYWRIGHT_JSON_OUTPUT_NAME="$RESULTS/playwright.json" \
     npx playwright test -c tests/e2e/playwright.config.ts --reporter=list,json </dev/null || status=1
 fi
 
