@@ -38,6 +38,10 @@ export const raisedHeight: Rule = {
       const { range, unit } = limitOf(std, key, units)
       const v = t.element.capHeight
       const first = t.lines[0]
+      const p = t.font.profile
+      // The I height is read on the stem's centre line; say so when a flag or slope reaches higher.
+      const top = (v * p.iTop) / p.iHeight
+      const flag = top - v > 1e-6 ? `; measured on the stem, the I's highest point (flag) reaches ${fmt(top, unit)}` : ''
       const x = first.ink.minX - 0.1 * v
       return {
         status: judge(v, range),
@@ -51,7 +55,7 @@ export const raisedHeight: Rule = {
           subject: `"${t.element.lines.join(' / ')}"`,
           measured: fmt(v, unit),
           limit: fmtRange(range, unit),
-          detail: exc ? ' (exception: separate visual characters carry the same information)' : '',
+          detail: (exc ? ' (exception: separate visual characters carry the same information)' : '') + flag,
         },
       }
     })
