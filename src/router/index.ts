@@ -26,6 +26,10 @@ export const routes: RouteRecordRaw[] = [
   { path: '/projects/:id', name: 'project', component: () => import('../views/ProjectView.vue'), props: true, meta: { title: 'Project' } },
   { path: '/projects/:projectId/signs/:signId', name: 'sign-editor', component: () => import('../views/SignEditorView.vue'), props: true, meta: { title: 'Sign editor' } },
   { path: '/admin/users', name: 'users', component: () => import('../views/UsersView.vue'), meta: { roles: ['admin'], title: 'Users' } },
+  { path: '/lessons', name: 'lessons', component: () => import('../views/LessonsView.vue'), meta: { title: 'Lessons' } },
+  { path: '/lessons/progress', name: 'lesson-progress', component: () => import('../views/TraineeProgressView.vue'), meta: { title: 'Lesson progress' } },
+  { path: '/lessons/:id', name: 'lesson', component: () => import('../views/LessonView.vue'), props: true, meta: { title: 'Lesson' } },
+  { path: '/practice/:practiceId', name: 'practice', component: () => import('../views/PracticeView.vue'), props: true, meta: { title: 'Practice' } },
   { path: '/forbidden', name: 'forbidden', component: () => import('../views/ForbiddenView.vue'), meta: { title: 'Not allowed' } },
   { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('../views/NotFoundView.vue'), meta: { public: true, title: 'Page not found' } },
 ]
