@@ -24,6 +24,9 @@ async function newRoomSign(page: Page, words: string) {
   await expect(page.getByTestId('findings-summary')).toContainText('meet', { timeout: 15_000 })
 }
 
+// The editor loads a font parser, liblouis and the engine in a worker: give each flow room on 2 shared cores.
+test.describe.configure({ timeout: 120_000 })
+
 const tree = (page: Page) => page.getByRole('tree', { name: /Elements/ })
 /** The finding held to one requirement of the selected standard (e.g. 'braille.separation-text'). */
 const finding = (page: Page, requirement: string) => page.locator(`[data-testid="finding"][data-requirement="${requirement}"]`)
