@@ -187,3 +187,42 @@ test('each save makes a revision; an earlier one can be restored', async ({ page
   await expect(tree(page).getByRole('treeitem', { name: /^Raised text: LAB ,/ })).toBeVisible()
   await snap(page, 'editor-08-revision-restored')
 })
+
+test('keyboard and marquee: select in the tree, duplicate, delete, undo; box-select on the canvas', async ({ page }) => {
+  await openProject(page)
+  await newRoomSign(page, 'OFFICE')
+  const items = tree(page).getByRole('treeitem')
+  await expect(items).toHaveCount(2)
+  // Keyboard only: focus the tree, select the text with Enter, duplicate and delete from the canvas.
+  await items.first().focus()
+  await page.keyboard.press('Enter')
+  await expect(items.first()).toHaveAttribute('aria-selected', 'true')
+  await page.getByTestId('editor-stage').focus()
+  await page.keyboard.press('Control+d')
+  await expect(items).toHaveCount(3)
+  await page.keyboard.press('Delete')
+  await expect(items).toHaveCount(2)
+  await page.keyboard.press('Control+z')
+  await expect(items).toHaveCount(3)
+  await page.keyboard.press('Control+z')
+  await expect(items).toHaveCount(2)
+  await page.keyboard.press('Shift+F10')
+  await expect(page.getByRole('menuitem', { name: /Duplicate/ })).toBeVisible()
+  await page.keyboard.press('Escape')
+
+  // Marquee from the plate's top-left corner over everything selects both elements.
+  await page.keyboard.press('Escape')
+  const ids = await items.evaluateAll((els) => els.map((e) => e.getAttribute('data-id')!))
+  const boxes = await page.evaluate((list) => list.map((i) => window.__tpEditorCanvas!.boxOf(i)!), ids)
+  const left = Math.min(...boxes.map((b) => b.x)) - 8
+  const top = Math.min(...boxes.map((b) => b.y)) - 8
+  const right = Math.max(...boxes.map((b) => b.x + b.width)) + 8
+  const bottom = Math.max(...boxes.map((b) => b.y + b.height)) + 8
+  await page.mouse.move(left, top)
+  await page.mouse.down()
+  await page.mouse.move((left + right) / 2, (top + bottom) / 2, { steps: 4 })
+  await page.mouse.move(right, bottom, { steps: 4 })
+  await page.mouse.up()
+  await expect(tree(page).locator('[aria-selected="true"]')).toHaveCount(2)
+  await snap(page, 'editor-09-marquee')
+})
