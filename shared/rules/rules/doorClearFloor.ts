@@ -18,13 +18,18 @@ export const doorClearFloor: Rule = {
   topic: 'installation',
   appliesTo: { signs: 'tactile', except: { 'elevator-car-control': 'car controls are not signs at a door', 'hoistway-jamb': 'hoistway signs go on the jambs (407.2.3.1)' } },
   messages: {
+    advisory: (d) => `${d.detail}`,
     meets: (d) => `The ${d.subject} clear floor space centred on the tactile characters ${d.detail}.`,
     fails: (d) => `The ${d.subject} clear floor space centred on the tactile characters ${d.detail}.`,
     'not-applicable': (d) => `Clear floor space not checked: ${d.detail}.`,
   },
   evaluate({ doc, units, m, std }) {
     const { door, location } = doc.installation
-    if (!door || !location) return [{ status: 'not-applicable', requirement: 'door.clear-floor', elements: [], data: { detail: 'no door in the installation context' } }]
+    if (!door || !location) {
+      // Room, restroom and exit signs are normally at a door: without one described, 703.4.2 is unchecked, not met.
+      const atDoor = ['room-identification', 'restroom', 'exit'].includes(doc.installation.signType)
+      return [{ status: atDoor ? 'advisory' : 'not-applicable', requirement: 'door.clear-floor', elements: [], data: { detail: atDoor ? 'The door is not described in the installation context, so the location at the door (703.4.2) was not checked; add the door to check it.' : 'no door in the installation context' } }]
+    }
     if (m.raised.length === 0) return [{ status: 'not-applicable', requirement: 'door.clear-floor', elements: [], data: { detail: 'no raised characters' } }]
     const { range, unit } = limitOf(std, 'door.clear-floor', units)
     const size = range.min ?? 18

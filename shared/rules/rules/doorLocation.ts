@@ -22,7 +22,11 @@ export const doorLocation: Rule = {
   },
   evaluate({ doc }) {
     const { door, location } = doc.installation
-    if (!door || !location) return [{ status: 'not-applicable', requirement: 'door.latch-side', elements: [], data: { detail: 'no door in the installation context' } }]
+    if (!door || !location) {
+      // Room, restroom and exit signs are normally at a door: without one described, 703.4.2 is unchecked, not met.
+      const atDoor = ['room-identification', 'restroom', 'exit'].includes(doc.installation.signType)
+      return [{ status: atDoor ? 'advisory' : 'not-applicable', requirement: 'door.latch-side', elements: [], data: { detail: atDoor ? 'The door is not described in the installation context, so the location at the door (703.4.2) was not checked; add the door to check it.' : 'no door in the installation context' } }]
+    }
     const r = (status: RuleResult['status'], requirement: RuleResult['requirement'], detail: string): RuleResult[] => [{ status, requirement, elements: [], data: { detail } }]
     const pushSideOk = door.swing === 'away-from-sign-side' && door.closer && !door.holdOpen
     if (location.mount === 'door-leaf') {

@@ -51,7 +51,9 @@ const location: RuleCase[] = [
   { name: 'push-side exception lost with a hold-open device', section: '703.4.2 Exception', source: 'S3', rule: 'door.location', requirement: 'door.push-side-exception', doc: door({ swing: 'away-from-sign-side', closer: true, holdOpen: true }, { mount: 'door-leaf', leaf: 'left' }), status: 'fails' },
   { name: 'push-side exception needs a closer', section: '703.4.2 Exception', source: 'S3', rule: 'door.location', requirement: 'door.push-side-exception', doc: door({ swing: 'away-from-sign-side', closer: false }, { mount: 'door-leaf', leaf: 'left' }), status: 'fails' },
   { name: 'sign on the pull side of the leaf fails', section: '703.4.2 Exception', source: 'S3', rule: 'door.location', requirement: 'door.push-side-exception', doc: door({ swing: 'toward-sign-side' }, { mount: 'door-leaf', leaf: 'left' }), status: 'fails' },
-  { name: 'no door: location not applicable', section: '703.4.2', source: 'S3', rule: 'door.location', doc: (d) => { d.installation.door = null }, status: 'not-applicable' },
+  { name: 'room sign with no door described: advisory (unchecked, not met)', section: '703.4.2', source: 'S3', rule: 'door.location', doc: (d) => { d.installation.door = null }, status: 'advisory' },
+  { name: 'room sign with no door described: clear floor advisory', section: '703.4.2', source: 'S3', rule: 'door.clear-floor', doc: (d) => { d.installation.door = null }, status: 'advisory' },
+  { name: 'hoistway jamb: door location not applicable', section: '703.4.2', source: 'S27', rule: 'door.location', doc: (d) => { d.installation.door = null; d.installation.signType = 'hoistway-jamb' }, status: 'not-applicable' },
 ]
 
 /** Put the tactile characters' centre `gap` beyond the edge of the 36 in door opening (square edge = centre − 9). */
