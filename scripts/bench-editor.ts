@@ -50,7 +50,7 @@ function chunkSizes() {
     editor: pick(/^SignEditorView-.*\.js$/).map(size),
     worker: pick(/^engine\.worker-.*\.js$/).map(size),
     // Konva + vue-konva land in a shared lazy chunk (named after its first module); find it by content.
-    konva: files.filter((f) => f.endsWith('.js') && f !== entry && readFileSync(path.join(dir, f), 'utf8').includes('getPointerPosition')).map(size),
+    konva: files.filter((f) => f.endsWith('.js') && f !== entry && !f.startsWith('SignEditorView-') && readFileSync(path.join(dir, f), 'utf8').includes('getPointerPosition')).map(size),
     entryHasKonva: entry ? readFileSync(path.join(dir, entry), 'utf8').includes('getPointerPosition') : false,
   }
 }
