@@ -80,3 +80,15 @@ export function proofAnsweredMail(a: { to: string; designerName: string; project
     a.comment,
   )
 }
+
+/** To a reviewer: several signs of one project wait for review (one mail, not one per sign). */
+export function reviewBatchRequestedMail(a: { to: string; reviewerName: string; designerName: string; projectName: string; signNames: string[]; note: string | null; link: string }): MailMessage {
+  const list = a.signNames.slice(0, 20).join(', ') + (a.signNames.length > 20 ? `, and ${a.signNames.length - 20} more` : '')
+  return compose(
+    a.to,
+    `Review requested: ${a.signNames.length} signs in ${a.projectName}`,
+    [`Hello ${a.reviewerName},`, `${a.designerName} submitted ${a.signNames.length} signs of ${a.projectName} for review: ${list}.`],
+    { href: a.link, label: 'Open the review queue' },
+    a.note,
+  )
+}

@@ -42,6 +42,7 @@ import { listProofsRoute } from './proofs-list'
 import { answerProofRoute } from './proofs-public-answer'
 import { publicProofRoute } from './proofs-public-get'
 import { revokeProofRoute } from './proofs-revoke'
+import { bulkSubmitRoute } from './signs-submit-bulk'
 import { inviteUserRoute } from './users-invite'
 import { listUsersRoute } from './users-list'
 import { updateUserRoute } from './users-update'
@@ -89,6 +90,7 @@ export const routes: readonly AnyRoute[] = [
   checkRunEventsRoute,
   // review and sign-off
   submitForReviewRoute,
+  bulkSubmitRoute,
   reviewQueueRoute,
   signReviewStateRoute,
   createCommentRoute,

@@ -214,3 +214,36 @@ describe('review: bad input and conflicts', () => {
     expect((await signRow(sign.id)).status).toBe('in-review')
   })
 })
+
+describe('review: bulk submit', () => {
+  it('submits selected signs in one go with one summary mail per reviewer', async () => {
+    const { srv, org, designer, reviewer, projectId, sign } = await setup('Bulk')
+    const exit = (await designer.post(`/api/projects/${projectId}/signs`, { name: 'Exit Stair A', signType: 'exit' })).body.sign
+    const res = await designer.post(`/api/projects/${projectId}/signs/submit`, { signs: [{ id: sign.id, version: 1 }, { id: exit.id, version: 1 }], note: 'Ground floor batch' })
+    expect(res.status).toBe(200)
+    expect(res.body.signs.map((s: any) => s.status)).toEqual(['in-review', 'in-review'])
+    const mails = srv.outbox.filter((m) => m.to === org.email.reviewer)
+    expect(mails).toHaveLength(1)
+    expect(mails[0]!.subject).toBe('Review requested: 2 signs in Bulk clinic')
+    expect(mails[0]!.text).toContain('Exam 104, Exit Stair A')
+    expect((await reviewer.get('/api/reviews')).body.reviews).toHaveLength(2)
+  })
+
+  it('all or none: one stale or ineligible sign → 409 listing every problem, nothing submitted', async () => {
+    const { srv, designer, projectId, sign } = await setup('BulkBad')
+    const exit = (await designer.post(`/api/projects/${projectId}/signs`, { name: 'Exit Stair A', signType: 'exit' })).body.sign
+    const jamb = (await designer.post(`/api/projects/${projectId}/signs`, { name: 'Jamb 1', signType: 'hoistway-jamb' })).body.sign
+    await designer.post(`/api/signs/${jamb.id}/submit`, { version: 1 })
+    const res = await designer.post(`/api/projects/${projectId}/signs/submit`, { signs: [{ id: sign.id, version: 1 }, { id: exit.id, version: 9 }, { id: jamb.id, version: 2 }, { id: 'abcdefghijklmnopqrst', version: 1 }] })
+    expect(res.status).toBe(409)
+    expect(res.body.error.details.problems.map((p: any) => p.reason)).toEqual(['changed by someone else (version 9 is now 1)', 'already in review', 'not a sign of this project'])
+    expect((await signRow(sign.id)).status).toBe('draft')
+    expect((await signRow(exit.id)).status).toBe('draft')
+    expect(srv.outbox.filter((m) => m.subject.startsWith('Review requested: ') && m.subject.includes('signs'))).toEqual([])
+    expect((await designer.post(`/api/projects/${projectId}/signs/submit`, { signs: [] })).status).toBe(400)
+    const other = await createTestOrg('BulkOther')
+    const intruder = srv.client()
+    await intruder.signIn(other.email.admin)
+    expect((await intruder.post(`/api/projects/${projectId}/signs/submit`, { signs: [{ id: sign.id, version: 1 }] })).status).toBe(404)
+  })
+})

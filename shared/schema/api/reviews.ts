@@ -128,3 +128,12 @@ export const createCommentBodySchema = z
     }
   })
 export type CreateCommentBody = z.infer<typeof createCommentBodySchema>
+
+/** Submit several signs of a project for review at once (all or none). */
+export const bulkSubmitBodySchema = z
+  .object({
+    signs: z.array(z.object({ id: idSchema, version: versionField }).strict()).min(1, 'choose at least one sign').max(500),
+    note: z.string().trim().max(2000).optional(),
+  })
+  .strict()
+export type BulkSubmitBody = z.infer<typeof bulkSubmitBodySchema>
