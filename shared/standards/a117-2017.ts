@@ -20,6 +20,8 @@ function a117Section(s: string, key: RequirementKey): string {
   if (s === 'Table 703.5.5') return 'Table 703.2.4'
   const m = /^(703)\.(\d)(.*)$/.exec(s)
   if (!m) return s
+  // Installation (ADA 703.4) has no known A117.1 number and would collide with A117.1's braille 703.4.
+  if (m[2] === '4') return `${s} (ADA)`
   // ADA 703.4 (installation) has no known A117.1 counterpart number: kept as is.
   const map: Record<string, string> = { '2': '3', '3': '4', '5': '2', '6': '5' }
   return `703.${map[m[2]] ?? m[2]}${m[3]}`
