@@ -37,6 +37,28 @@ describe('geometry', () => {
     expect(checked).toBeGreaterThan(400)
   })
 
+  it('pruned distance equals brute force on 500 random star polygons (seeded), overlapping or apart', () => {
+    let seed = 12345
+    const rnd = () => ((seed = (seed * 1103515245 + 12345) % 2147483648) / 2147483648)
+    const star = (n: number) => {
+      const pts = new Float64Array(2 * n)
+      for (let i = 0; i < n; i++) {
+        const a = (2 * Math.PI * i) / n
+        const r = 0.3 + rnd()
+        pts[2 * i] = r * Math.cos(a)
+        pts[2 * i + 1] = r * Math.sin(a)
+      }
+      return makeShape([pts])
+    }
+    for (let k = 0; k < 500; k++) {
+      const a = star(3 + Math.floor(rnd() * 40))
+      const b = star(3 + Math.floor(rnd() * 40))
+      const dx = rnd() * 4 - 1
+      const dy = rnd() * 2 - 1
+      expect(shapeDistance(a, b, dx, dy).distance, `case ${k}`).toBeCloseTo(shapeDistanceBrute(a, b, dx, dy).distance, 12)
+    }
+  })
+
   it('point distance to a shape', () => {
     const s = makeShape([rectContour(0, 0, 2, 1)])
     expect(pointShapeDistance(3, 0.5, s).distance).toBeCloseTo(1, 12)
