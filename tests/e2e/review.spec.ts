@@ -1,0 +1,187 @@
+import { execFileSync } from 'node:child_process'
+import { mkdtempSync, readFileSync, readdirSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import path from 'node:path'
+import { fileURLToPath } from 'node:url'
+import { expect, test, type Browser, type Page } from '@playwright/test'
+import { DEMO_PASSWORD, MAIL_API, expectNoAxeViolations, signIn, snap } from './support'
+
+/**
+ * Schedule to sign-off, as the people do it: a designer imports the demo clinic's schedule,
+ * batch-checks it with the progress bar and submits a sign; the reviewer pins a comment and
+ * returns it; the designer fixes and resubmits; the reviewer signs off; the e-mails arrive in the
+ * fake inbox; the PDF report is downloaded and read with poppler.
+ */
+
+const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..')
+const SCHEDULE = path.join(ROOT, 'examples/harbor-point-schedule.csv')
+const DESIGNER = 'designer@tidewater.example'
+const REVIEWER = 'reviewer@tidewater.example'
+
+test.describe.configure({ timeout: 240_000 })
+
+interface Mail {
+  id: string
+  subject: string
+  text: string
+  to: Array<{ address: string }>
+}
+/** Wait for a mail to `to` whose subject matches (polls the fake inbox; no fixed sleeps). */
+async function waitForMailLike(to: string, subject: RegExp, timeoutMs = 15_000): Promise<Mail> {
+  const deadline = Date.now() + timeoutMs
+  for (;;) {
+    const mails = (await (await fetch(MAIL_API)).json()) as Mail[]
+    const hit = mails.find((m) => m.to.some((t) => t.address === to) && subject.test(m.subject))
+    if (hit) return hit
+    if (Date.now() > deadline) throw new Error(`no mail to ${to} matching ${subject} within ${timeoutMs} ms (have: ${mails.map((m) => m.subject).join(' | ')})`)
+    await new Promise((r) => setTimeout(r, 250))
+  }
+}
+
+async function check(page: Page, name: string) {
+  await expectNoAxeViolations(page, name)
+  await snap(page, name)
+}
+
+/** A second person in their own browser context. */
+async function personPage(browser: Browser, email: string): Promise<Page> {
+  const ctx = await browser.newContext()
+  const page = await ctx.newPage()
+  await signIn(page, email, DEMO_PASSWORD)
+  return page
+}
+
+test('schedule import, batch check, review with a pinned comment, return, resubmit, sign-off, e-mails and the PDF report', async ({ page, browser }) => {
+  const projectName = `Harbor Point Clinic, east wing ${Date.now().toString(36)}`
+  await signIn(page, DESIGNER)
+  const created = await page.request.post('/api/projects', { data: { name: projectName, address: '1 Harbor Point Way' }, headers: { Origin: new URL(page.url()).origin } })
+  expect(created.status()).toBe(201)
+  const projectId = (await created.json()).project.id as string
+  await page.goto(`/projects/${projectId}`)
+  await expect(page.getByRole('heading', { level: 1, name: projectName })).toBeVisible()
+
+  // --- schedule import: a file with a bad row first (row-level problems, nothing written) ---
+  await page.getByRole('button', { name: 'Import schedule' }).click()
+  const dialog = page.getByRole('dialog', { name: 'Import sign schedule' })
+  await dialog.getByLabel('Schedule file (CSV)').setInputFiles({
+    name: 'bad.csv',
+    mimeType: 'text/csv',
+    buffer: Buffer.from('room_number,room_name,sign_type,door\n101,Exam Room,room-identification,single\n102,Exam Room,round-sign,revolving\n'),
+  })
+  const problems = dialog.getByTestId('schedule-problems')
+  await expect(problems).toBeVisible()
+  await expect(problems.getByRole('row', { name: /3 sign_type "round-sign" is not one of/ })).toBeVisible()
+  await expect(problems.getByRole('row', { name: /3 door "revolving" must be single, double or empty/ })).toBeVisible()
+  await expect(dialog.getByRole('button', { name: /^Import/ })).toBeDisabled()
+  await check(page, 'review-01-schedule-problems')
+
+  await dialog.getByLabel('Schedule file (CSV)').setInputFiles(SCHEDULE)
+  await expect(dialog.getByTestId('schedule-rows')).toBeVisible()
+  await expect(problems).toBeHidden()
+  const rowCount = readFileSync(SCHEDULE, 'utf8').trim().split('\n').length - 1
+  const importButton = dialog.getByRole('button', { name: `Import ${rowCount} signs` })
+  await expect(importButton).toBeEnabled()
+  await check(page, 'review-02-schedule-preview')
+  await importButton.click()
+  // 21 layouts with Grade 2 braille are built on the server: allow for busy shared cores.
+  await expect(dialog).toBeHidden({ timeout: 90_000 })
+  const table = page.getByTestId('sign-table')
+  await expect(page.getByRole('heading', { level: 2, name: `Signs (${rowCount})` })).toBeVisible()
+  await expect(table.getByRole('link', { name: 'Exam Room 101', exact: true })).toBeVisible()
+
+  // --- batch check with the progress bar and a summary ---
+  await page.getByRole('button', { name: 'Check all signs' }).click()
+  const bar = page.getByTestId('batch-progress')
+  await expect(bar).toBeVisible()
+  await expect(page.getByTestId('batch-summary')).toBeVisible({ timeout: 120_000 })
+  await expect(bar).toHaveAttribute('aria-valuenow', '100')
+  await expect(page.getByRole('status').filter({ hasText: 'Batch check finished' })).toContainText(`${rowCount} of ${rowCount} signs checked`)
+  // Every row now shows counts of the current revision's check (no "not checked" dashes left).
+  await expect(table.getByText('Not checked yet')).toHaveCount(0)
+  await check(page, 'review-03-batch-checked')
+
+  // --- submit one sign for review from the table ---
+  const row = table.getByRole('row', { name: /Exam Room 101\b/ })
+  await row.getByRole('checkbox').check()
+  await page.getByRole('button', { name: 'Submit for review (1)' }).click()
+  await expect(row).toContainText('In review')
+  const requested = await waitForMailLike(REVIEWER, /^Review requested: Exam Room 101 \(revision 1\)/)
+  const reviewLink = /(http:\/\/\S+\/review)\b/.exec(requested.text)?.[1]
+  expect(reviewLink).toBeTruthy()
+
+  // --- reviewer: queue, pinned comment, return ---
+  const reviewer = await personPage(browser, REVIEWER)
+  await reviewer.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Reviews' }).click()
+  await expect(reviewer.getByRole('heading', { level: 1, name: 'Reviews' })).toBeVisible()
+  const queue = reviewer.getByTestId('review-queue')
+  await expect(queue.getByRole('row', { name: new RegExp(`Exam Room 101.*${projectName.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}`) })).toBeVisible()
+  await check(reviewer, 'review-04-queue')
+  await reviewer.goto(reviewLink!)
+  await expect(reviewer.getByRole('heading', { level: 1, name: 'Review: Exam Room 101' })).toBeVisible()
+  await expect(reviewer.getByTestId('review-findings-summary')).toBeVisible()
+  // A finding shows its dimension on the drawing.
+  await reviewer.getByRole('checkbox', { name: /Show “meets”/ }).check()
+  await reviewer.getByRole('button', { name: /703\.3\.2\s+Braille 3\/8 in minimum from any other tactile characters/ }).first().click()
+  await expect(reviewer.getByTestId('drawing-dimension')).toBeVisible()
+
+  await reviewer.getByTestId('pin-mode').click()
+  const drawing = reviewer.getByTestId('sign-drawing')
+  const box = (await drawing.boundingBox())!
+  await drawing.click({ position: { x: box.width * 0.3, y: box.height * 0.72 } })
+  await reviewer.getByLabel('Comment', { exact: true }).fill('Braille sits tight under the room number: move it down 1/16 in and recheck.')
+  await reviewer.getByRole('button', { name: 'Pin comment' }).click()
+  await expect(reviewer.getByTestId('pin-1')).toBeVisible()
+  await expect(reviewer.getByTestId('thread-1')).toContainText('move it down 1/16 in')
+  await check(reviewer, 'review-05-pinned-comment')
+  await reviewer.getByLabel('Comments to the designer').fill('See the pinned comment on the braille; otherwise fine.')
+  await reviewer.getByRole('button', { name: 'Return with comments' }).click()
+  await expect(reviewer.getByText('Returned', { exact: true }).first()).toBeVisible()
+  const returned = await waitForMailLike(DESIGNER, /^Returned: Exam Room 101 \(revision 1\)/)
+  expect(returned.text).toContain('See the pinned comment on the braille')
+
+  // --- designer: reply, fix, resubmit ---
+  await page.goto(reviewLink!.replace(new URL(reviewLink!).origin, ''))
+  await expect(page.getByRole('heading', { level: 1, name: 'Review: Exam Room 101' })).toBeVisible()
+  await page.getByLabel('Reply to comment 1').fill('Moved down 1/16 in.')
+  await page.getByTestId('thread-1').getByRole('button', { name: 'Reply' }).click()
+  await expect(page.getByTestId('thread-1')).toContainText('Moved down 1/16 in.')
+  // The fix itself is an edit of the layout (the editor has its own tests): one PATCH as the designer.
+  const origin = new URL(page.url()).origin
+  const signId = new URL(page.url()).pathname.split('/')[4]!
+  const current = (await (await page.request.get(`/api/signs/${signId}`)).json()).sign
+  const doc = structuredClone(current.document)
+  doc.elements.find((e: { kind: string }) => e.kind === 'braille').position.y += 0.0625
+  const patched = await page.request.patch(`/api/signs/${signId}`, { data: { version: current.version, document: doc }, headers: { Origin: origin } })
+  expect(patched.status()).toBe(200)
+  expect((await patched.json()).sign.revision).toBe(2)
+  await page.reload()
+  await expect(page.getByText('Revision 2', { exact: true })).toBeVisible()
+  await page.getByRole('button', { name: 'Submit for review' }).click()
+  await expect(page.getByText('In review', { exact: true }).first()).toBeVisible()
+  await waitForMailLike(REVIEWER, /^Review requested: Exam Room 101 \(revision 2\)/)
+
+  // --- reviewer signs off revision 2 ---
+  await reviewer.goto(reviewLink!)
+  await expect(reviewer.getByRole('heading', { name: 'Decision on revision 2' })).toBeVisible()
+  await reviewer.getByRole('button', { name: 'Sign off revision 2' }).click()
+  const signoffs = reviewer.getByTestId('signoffs')
+  await expect(signoffs).toContainText('Signed off: revision 2')
+  await expect(signoffs).toContainText('Riley Reviewer')
+  await expect(signoffs.locator('.review__hash')).toHaveText(/^[0-9a-f]{64}$/)
+  await check(reviewer, 'review-06-signed-off')
+  const signedMail = await waitForMailLike(DESIGNER, /^Signed off: Exam Room 101 \(revision 2\)/)
+  expect(signedMail.text).toContain('Riley Reviewer signed off revision 2')
+
+  // --- the PDF report, downloaded as a user does, read with poppler ---
+  const [download] = await Promise.all([reviewer.waitForEvent('download'), reviewer.getByRole('link', { name: 'Download PDF report' }).click()])
+  const dir = mkdtempSync(path.join(tmpdir(), 'tp-e2e-pdf-'))
+  const pdfPath = path.join(dir, download.suggestedFilename())
+  await download.saveAs(pdfPath)
+  expect(download.suggestedFilename()).toBe('exam-room-101-r2-check-report.pdf')
+  const text = execFileSync('pdftotext', ['-layout', pdfPath, '-']).toString()
+  for (const s of ['Check report: Exam Room 101', 'Findings', '703.2.5', 'Table 703.3.1', '703.3.2', 'Signed off', 'Riley Reviewer', "matches this revision's document", 'authority having jurisdiction (AHJ)']) expect(text).toContain(s)
+  execFileSync('pdftoppm', ['-png', '-r', '50', '-f', '1', '-l', '1', pdfPath, path.join(dir, 'page')])
+  expect(readdirSync(dir).some((f) => f.startsWith('page') && f.endsWith('.png'))).toBe(true)
+
+  await reviewer.context().close()
+})
