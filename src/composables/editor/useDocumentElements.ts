@@ -1,5 +1,5 @@
 import type { Ref } from 'vue'
-import type { LayoutDocument, LayoutElement, Plate, Installation } from '../../../shared/schema/layout'
+import type { LayoutDocument, LayoutElement, Plate, Installation, RaisedText } from '../../../shared/schema/layout'
 import { setElementOrigin, elementOrigin } from '../../editor/elementGeometry'
 import type { EditHistory, EditOptions } from './useEditHistory'
 import { plainCopy } from './useEditHistory'
@@ -41,10 +41,20 @@ export function useDocumentElements(doc: Ref<LayoutDocument | null>, history: Ed
     d.elements = d.elements.filter((e) => !gone.has(e.id))
     for (const el of d.elements) if (el.kind === 'pictogram-field' && el.descriptorId && gone.has(el.descriptorId)) el.descriptorId = null
   }
+  /** Top of the first uppercase I to the last baseline (moving the text itself is not a change of extent). */
+  const lastBaseline = (t: RaisedText) => t.capHeight + (t.lines.length - 1) * t.lineSpacing
   function applyPatch(d: LayoutDocument, id: string, patch: ElementPatch) {
     const el = find(d, id)
     if (!el) return
+    const before = el.kind === 'raised-text' ? lastBaseline(el) : null
     Object.assign(el, plainCopy(patch))
+    // Braille stays below its text (§703.3.2): when the text grows or shrinks (lines, height,
+    // line spacing), its braille moves by the same amount, in the same undo step. Moving the
+    // text moves only the text, as dragging does.
+    if (el.kind === 'raised-text' && before !== null) {
+      const dy = lastBaseline(el) - before
+      if (dy !== 0) for (const b of d.elements) if (b.kind === 'braille' && b.textId === el.id) b.position = { x: b.position.x, y: b.position.y + dy }
+    }
   }
   function applyMove(d: LayoutDocument, moves: Array<{ id: string; dx: number; dy: number }>) {
     for (const m of moves) {

@@ -156,6 +156,21 @@ describe('element apply functions', () => {
     expect(text().position).toEqual({ x: 2, y: 2 })
   })
 
+  it('braille follows its text when the text gains a line or changes height, in one undo step', () => {
+    const { doc, els, history } = setup()
+    els.addElements([{ kind: 'braille', id: 'b', textId: 'text-1', code: 'ueb', acronyms: [], properNouns: [], capitalPolicy: 'first-word',
+      dots: { diameter: 0.06, spacing: 0.1, cellPitch: 0.3, linePitch: 0.4, height: 0.03 }, align: 'left', position: { x: 1, y: 2.2 }, generated: null, override: null }], { history: 'skip' })
+    const b = () => doc.value!.elements[1] as { position: { x: number; y: number } }
+    els.updateElement('text-1', { lines: ['EXAM', 'ROOM'] }) // + one line spacing (1 1/8 in)
+    expect(b().position.y).toBeCloseTo(2.2 + 1.125, 12)
+    els.updateElement('text-1', { capHeight: 1 }) // + 1/4 in
+    expect(b().position.y).toBeCloseTo(2.2 + 1.125 + 0.25, 12)
+    els.updateElement('text-1', { tracking: 0.05 }) // no vertical change
+    expect(b().position.y).toBeCloseTo(3.575, 12)
+    history.undo(); history.undo(); history.undo()
+    expect(b().position.y).toBe(2.2)
+  })
+
   it('braille regeneration is not an undo step', () => {
     const { doc, els, history } = setup()
     els.addElements([{ kind: 'braille', id: 'b', textId: 'text-1', code: 'ueb', acronyms: [], properNouns: [], capitalPolicy: 'first-word',
