@@ -131,3 +131,20 @@ test('the height calculator answers with the table lookup; a rule link lands on 
   await page.goto('/lessons/braille#position-and-clear-space')
   await expect(page.locator('h2#position-and-clear-space')).toBeInViewport()
 })
+
+test('designer: each finding in the editor links to the lesson section that explains it', async ({ page }) => {
+  test.setTimeout(120_000)
+  await signIn(page, 'designer@tidewater.example')
+  await page.getByRole('table', { name: 'Projects' }).getByRole('link', { name: 'Harbor Point Community Clinic' }).click()
+  await expect(page.getByRole('heading', { level: 2, name: 'Signs' })).toBeVisible()
+  await page.getByRole('table', { name: /Signs/ }).getByRole('link').first().click()
+  await expect(page.getByTestId('sign-editor')).toBeVisible()
+  await expect(page.getByTestId('findings-summary')).toContainText('meet', { timeout: 30_000 })
+  const link = page.getByTestId('finding-lesson-link').first()
+  await expect(link).toHaveAttribute('target', '_blank')
+  const href = (await link.getAttribute('href'))!
+  expect(href).toMatch(/^\/lessons\/[a-z-]+#[a-z0-9-]+$/)
+  await expect(page.getByTestId('finding-lesson-link')).toHaveCount(await page.getByTestId('finding').count())
+  await page.goto(href)
+  await expect(page.locator(`h2#${href.split('#')[1]}`)).toBeInViewport()
+})
