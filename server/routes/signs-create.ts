@@ -8,6 +8,7 @@ import { signJson } from '../signs/serialize'
 import { buildSignLayout, fillMissingBraille } from '../signs/templates'
 import { getTranslator } from '../signs/translator'
 import { insertRevision, limitLayoutBody } from '../signs/write'
+import { summaryForSave } from '../signs/check'
 import { defineRoute } from './define'
 import { loadProject } from './projects-get'
 
@@ -33,6 +34,7 @@ export const createSignRoute = defineRoute({
       : await buildSignLayout({ signType: body.signType, templateId: body.templateId, text: body.text, pictogramId: body.pictogramId, units: project.unitSystem, name: body.name })
     document = { ...document, installation: { ...document.installation, signType: body.signType } }
     if (!document.name) document.name = body.name
+    const lastCheck = await summaryForSave(deps.db, user.organisationId, document, project.standardId, 1)
     const id = newId()
     const row = await deps.db.transaction(async (tx) => {
       await tx.insert(signs).values({
@@ -45,6 +47,7 @@ export const createSignRoute = defineRoute({
         document,
         currentRevision: 1,
         schedule: body.schedule ?? null,
+        lastCheck,
         lastEditorId: user.id,
       })
       const hash = await insertRevision(tx, { signId: id, number: 1, document, authorId: user.id })

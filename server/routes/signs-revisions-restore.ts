@@ -4,6 +4,7 @@ import { audit } from '../audit'
 import { SIGN_EDITORS, loadSign } from '../signs/access'
 import { readDocument, signJson } from '../signs/serialize'
 import { staleSign, updateSignRow } from '../signs/write'
+import { projectStandard, summaryForSave } from '../signs/check'
 import { defineRoute } from './define'
 import { loadRevision } from './signs-revisions-get'
 
@@ -25,12 +26,15 @@ export const restoreRevisionRoute = defineRoute({
     const row = await deps.db.transaction(async (tx) => {
       const { sign, revision } = await loadRevision(tx, user.organisationId, params.id, params.number)
       if (sign.version !== body.version) throw staleSign(body.version, sign)
+      const document = readDocument(revision.document)
+      const lastCheck = await summaryForSave(tx, user.organisationId, document, await projectStandard(tx, sign.projectId), sign.currentRevision + 1)
       const { revision: number, hash, status } = await updateSignRow(tx, sign, {
+        lastCheck,
         organisationId: user.organisationId,
         userId: user.id,
         version: body.version,
         changes: {},
-        document: readDocument(revision.document),
+        document,
         restoredFrom: revision.number,
       })
       await audit(tx, { organisationId: user.organisationId, actorUserId: user.id, action: 'sign.restore', subjectType: 'sign', subjectId: sign.id, details: { restoredFrom: revision.number, revision: number, contentHash: hash, ...(status !== sign.status ? { statusFrom: sign.status, statusTo: status } : {}) } })

@@ -4,6 +4,7 @@ import { audit } from '../audit'
 import { SIGN_EDITORS, loadSign } from '../signs/access'
 import { signJson } from '../signs/serialize'
 import { limitLayoutBody, staleSign, updateSignRow } from '../signs/write'
+import { projectStandard, summaryForSave } from '../signs/check'
 import { defineRoute } from './define'
 
 export { updateSignBodySchema }
@@ -34,7 +35,8 @@ export const updateSignRoute = defineRoute({
       const changedDocument = next && contentHash(next) !== contentHash(current.document) ? next : undefined
       const changedFields = Object.fromEntries(Object.entries(changes).filter(([k, v]) => v !== undefined && v !== current[k as keyof typeof current]))
       if (!changedDocument && Object.keys(changedFields).length === 0) return null
-      const { revision, hash, status } = await updateSignRow(tx, current, { organisationId: user.organisationId, userId: user.id, version, changes: changedFields, document: changedDocument })
+      const lastCheck = changedDocument ? await summaryForSave(tx, user.organisationId, changedDocument, await projectStandard(tx, current.projectId), current.currentRevision + 1) : undefined
+      const { revision, hash, status } = await updateSignRow(tx, current, { organisationId: user.organisationId, userId: user.id, version, changes: changedFields, document: changedDocument, lastCheck })
       await audit(tx, {
         organisationId: user.organisationId,
         actorUserId: user.id,

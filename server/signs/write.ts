@@ -2,7 +2,7 @@ import { and, eq, sql } from 'drizzle-orm'
 import type { RequestHandler } from 'express'
 import { contentHash } from '../../shared/canonical/index'
 import { LAYOUT_MAX_BYTES, type LayoutDocument } from '../../shared/schema/layout'
-import type { SignStatus } from '../../shared/schema/api/signs'
+import type { SignCheckSummary, SignStatus } from '../../shared/schema/api/signs'
 import type { Transaction } from '../db/client'
 import { newId } from '../db/ids'
 import { signReviews, signRevisions, signs, type SignRow } from '../db/schema/index'
@@ -61,7 +61,7 @@ export async function insertRevision(tx: Transaction, args: { signId: string; nu
 export async function updateSignRow(
   tx: Transaction,
   current: SignRow,
-  args: { organisationId: string; userId: string; version: number; changes: Partial<Pick<SignRow, 'name' | 'signType' | 'status'>>; document?: LayoutDocument; restoredFrom?: number; statusOnly?: boolean },
+  args: { organisationId: string; userId: string; version: number; changes: Partial<Pick<SignRow, 'name' | 'signType' | 'status'>>; document?: LayoutDocument; restoredFrom?: number; statusOnly?: boolean; lastCheck?: SignCheckSummary | null },
 ): Promise<{ revision: number | null; hash: string | null; status: SignStatus }> {
   const revision = args.document ? current.currentRevision + 1 : null
   // Review steps change only the status: the last editor stays the person who edited the layout.
@@ -70,6 +70,8 @@ export async function updateSignRow(
     set.document = args.document
     set.currentRevision = revision
     set.status = statusAfterEdit(args.changes.status ?? current.status)
+    // Counts belong to a revision: a new document replaces them (null when not checked).
+    set.lastCheck = args.lastCheck ? { ...args.lastCheck, revision: revision! } : null
   }
   const result = await tx
     .update(signs)

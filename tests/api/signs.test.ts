@@ -28,7 +28,9 @@ describe('signs: happy path', () => {
   it('creates from the room template with Grade 2 braille, lists, reads, and records revision 1', async () => {
     const { c, org, projectId } = await setup('SignHappy')
     const sign = await createRoomSign(c, projectId)
-    expect(sign).toMatchObject({ projectId, name: 'Exam 104', signType: 'room-identification', status: 'draft', version: 1, revision: 1, schedule: null, lastCheck: null })
+    expect(sign).toMatchObject({ projectId, name: 'Exam 104', signType: 'room-identification', status: 'draft', version: 1, revision: 1, schedule: null })
+    // Every save is checked on the server so the project's sign table shows current counts.
+    expect(sign.lastCheck).toMatchObject({ standard: 'ada-2010', revision: 1, fails: 0 })
     expect(sign.lastEditor).toEqual({ id: org.userId.designer, displayName: `designer of ${org.name}` })
     const text = sign.document.elements.find((e: any) => e.kind === 'raised-text')
     const braille = sign.document.elements.find((e: any) => e.kind === 'braille')
@@ -75,6 +77,7 @@ describe('signs: happy path', () => {
     expect(edited.status).toBe(200)
     expect(edited.body.sign).toMatchObject({ version: 3, revision: 2 })
     expect(edited.body.sign.document.elements.find((e: any) => e.kind === 'braille').position.y).toBe(b.position.y)
+    expect(edited.body.sign.lastCheck).toMatchObject({ revision: 2, fails: 0 })
 
     const list = (await c.get(`/api/signs/${sign.id}/revisions`)).body.revisions
     expect(list.map((r: any) => r.number)).toEqual([2, 1])
@@ -89,11 +92,24 @@ describe('signs: happy path', () => {
     expect(restored.status).toBe(200)
     expect(restored.body.sign).toMatchObject({ version: 4, revision: 3 })
     expect(restored.body.sign.document).toEqual(sign.document)
+    expect(restored.body.sign.lastCheck).toMatchObject({ revision: 3 })
     const r3 = (await c.get(`/api/signs/${sign.id}/revisions/3`)).body.revision
     expect(r3).toMatchObject({ number: 3, restoredFrom: 1, contentHash: list[1].contentHash })
 
     const actions = (await testDb().db.select().from(auditLog).where(and(eq(auditLog.organisationId, org.id), eq(auditLog.subjectId, sign.id)))).map((a) => a.action)
     expect(actions.sort()).toEqual(['sign.create', 'sign.restore', 'sign.update', 'sign.update'])
+  })
+
+  it('a save that breaks a rule stores the failing count with the new revision', async () => {
+    const { c, projectId } = await setup('SignCounts')
+    const sign = await createRoomSign(c, projectId)
+    const tight = structuredClone(sign.document)
+    tight.elements[1].position.y -= 0.15 // braille about 1/4 in under the text; §703.3.2 wants 3/8 in
+    const res = await c.patch(`/api/signs/${sign.id}`, { version: 1, document: tight })
+    expect(res.body.sign.lastCheck).toMatchObject({ standard: 'ada-2010', revision: 2 })
+    expect(res.body.sign.lastCheck.fails).toBeGreaterThanOrEqual(1)
+    const listed = (await c.get(`/api/projects/${projectId}/signs`)).body.signs[0]
+    expect(listed.lastCheck.fails).toBe(res.body.sign.lastCheck.fails)
   })
 
   it('changing the sign type changes the document too, as a new revision', async () => {
