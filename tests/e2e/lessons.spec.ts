@@ -148,3 +148,29 @@ test('designer: each finding in the editor links to the lesson section that expl
   await page.goto(href)
   await expect(page.locator(`h2#${href.split('#')[1]}`)).toBeInViewport()
 })
+
+test('lesson Markdown is sanitised in the browser (scripts, handlers and javascript: links removed)', async ({ page }) => {
+  await signIn(page, 'trainee@tidewater.example')
+  const dialogs: string[] = []
+  page.on('dialog', (d) => {
+    dialogs.push(d.message())
+    void d.dismiss()
+  })
+  // Serve the real lesson with hostile Markdown appended, as if a content file had been tampered with.
+  await page.route('**/api/lessons/braille', async (route) => {
+    const res = await route.fetch()
+    const json = await res.json()
+    json.lesson.body += '\n\n<script>window.__pwned = 1; alert("s")</script>\n\n<img src="data:," onerror="window.__pwned = 2; alert(\'i\')">\n\n[evil](javascript:alert("l"))\n\n<a href="#x" onclick="alert(\'c\')" id="evil-a">a</a>\n'
+    await route.fulfill({ response: res, json })
+  })
+  await page.goto('/lessons/braille')
+  await expect(page.getByRole('heading', { level: 1, name: 'Braille' })).toBeVisible()
+  await expect(page.locator('h2#position-and-clear-space')).toBeVisible()
+  const text = page.locator('.lesson__text')
+  await expect(text.locator('script')).toHaveCount(0)
+  await expect(text.locator('[onerror], [onclick]')).toHaveCount(0)
+  await expect(text.locator('a[href^="javascript:"]')).toHaveCount(0)
+  await expect(text.getByText('evil')).toBeVisible()
+  expect(await page.evaluate(() => (window as unknown as { __pwned?: number }).__pwned)).toBeUndefined()
+  expect(dialogs).toEqual([])
+})
