@@ -27,6 +27,9 @@ export { migrateLayout }
 /** Hard cap for a serialised document (bytes); the check CLI and the API refuse larger payloads. */
 export const LAYOUT_MAX_BYTES = 1_000_000
 
+/** Cap on the characters of all text lines of one sign: keeps a check bounded (signs carry a few words). */
+export const LAYOUT_MAX_TEXT_CHARS = 2_000
+
 // zod 4's z.number() already rejects NaN and ±Infinity.
 const finite = z.number()
 /** A length ≥ 0 in document units. */
@@ -350,6 +353,11 @@ export const LayoutDocumentSchema = z
     installation: InstallationSchema,
   })
   .superRefine((doc, ctx) => {
+    let chars = 0
+    for (const el of doc.elements) if (el.kind === 'raised-text' || el.kind === 'visual-text') for (const l of el.lines) chars += l.length
+    if (chars > LAYOUT_MAX_TEXT_CHARS) {
+      ctx.addIssue({ code: 'custom', path: ['elements'], message: `text elements hold ${chars} characters; a sign may have at most ${LAYOUT_MAX_TEXT_CHARS}` })
+    }
     const seen = new Map<string, number>()
     doc.elements.forEach((el, i) => {
       if (seen.has(el.id)) {

@@ -102,27 +102,62 @@ export function measureText(el: RaisedText | VisualText, font: FontEntry): TextM
     return shapes
   }
 
+  // Per line: inked glyphs sorted by the centre of their box, and the widest half-width,
+  // so a point query walks outward from the nearest centre and stops early.
+  const index = lines.map((line) => {
+    const inked = line.layout.glyphs.filter((g) => g.glyph.shape.segs.length > 0)
+    const centre = (g: (typeof inked)[number]) => g.penX + (g.glyph.shape.bounds.minX + g.glyph.shape.bounds.maxX) / 2
+    inked.sort((a, b) => centre(a) - centre(b))
+    const centres = Float64Array.from(inked.map(centre))
+    let half = 0
+    for (const g of inked) half = Math.max(half, (g.glyph.shape.bounds.maxX - g.glyph.shape.bounds.minX) / 2)
+    return { inked, centres, half }
+  })
+
   const pointDistance = (x: number, y: number) => {
     let best = { distance: Infinity, at: { x: NaN, y: NaN } }
-    for (const line of lines) {
+    lines.forEach((line, li) => {
+      // PERF: a line whose ink box is already farther than the best cannot hold the closest glyph.
+      const lb = line.ink
+      if (Math.hypot(Math.max(0, lb.minX - x, x - lb.maxX), Math.max(0, lb.minY - y, y - lb.maxY)) >= best.distance) return
+      const { inked, centres, half } = index[li]
       // Work in the unit-size frame of the line: no transformed copies needed.
       const u = (x - line.originX) / scale
       const v = (line.baselineY - y) / scale
-      for (const pg of line.layout.glyphs) {
-        const s = pg.glyph.shape
-        if (s.segs.length === 0) continue
+      let lo = 0
+      let hi = centres.length
+      while (lo < hi) {
+        const mid = (lo + hi) >> 1
+        if (centres[mid] < u) lo = mid + 1
+        else hi = mid
+      }
+      let left = lo - 1
+      let right = lo
+      const visit = (k: number) => {
+        const pg = inked[k]
+        const sh = pg.glyph.shape
         const gx = u - pg.penX
         // PERF: skip glyphs whose bounds are already farther than the best distance.
-        const dx = Math.max(0, s.bounds.minX - gx, gx - s.bounds.maxX)
-        const dy = Math.max(0, s.bounds.minY - v, v - s.bounds.maxY)
-        if (Math.hypot(dx, dy) * scale >= best.distance) continue
-        const r = pointShapeDistance(gx, v, s)
-        const d = Math.max(0, r.distance - s.flatError) * scale
+        const dx = Math.max(0, sh.bounds.minX - gx, gx - sh.bounds.maxX)
+        const dy = Math.max(0, sh.bounds.minY - v, v - sh.bounds.maxY)
+        if (Math.hypot(dx, dy) * scale >= best.distance) return
+        const r = pointShapeDistance(gx, v, sh)
+        const d = Math.max(0, r.distance - sh.flatError) * scale
         if (d < best.distance) {
           best = { distance: d, at: { x: line.originX + (pg.penX + r.at.x) * scale, y: line.baselineY - r.at.y * scale } }
         }
       }
-    }
+      // Walk outward; every glyph's box is at least |centre − u| − half away horizontally.
+      while (left >= 0 || right < inked.length) {
+        const dl = left >= 0 ? u - centres[left] : Infinity
+        const dr = right < inked.length ? centres[right] - u : Infinity
+        const takeLeft = dl <= dr
+        const dist = takeLeft ? dl : dr
+        if ((dist - half) * scale >= best.distance) break
+        if (takeLeft) visit(left--)
+        else visit(right++)
+      }
+    })
     return best
   }
 

@@ -57,6 +57,12 @@ describe('bad documents get clear errors and never throw', () => {
     if (!r.ok) expect(r.reason).toBe('too-large')
   })
 
+  it('more than 2,000 characters of text on one sign is refused (keeps every check bounded)', () => {
+    const d = baseSign()
+    for (let i = 0; i < 20; i++) d.elements.push({ kind: 'visual-text', id: `v${i}`, lines: ['X'.repeat(120)], fontId: 'b612', capHeight: 1, tracking: 0, lineSpacing: 1.5, align: 'left', position: { x: 0, y: 0 }, colour: '#ffffff' })
+    expect(issuesOf(d).map((i) => i.path)).toContain('elements')
+  })
+
   it('broken JSON is reported, not thrown', () => {
     const r = checkLayoutText('{"schemaVersion": 1,', ctx)
     expect(r.ok).toBe(false)
