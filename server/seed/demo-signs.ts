@@ -2,7 +2,9 @@ import { and, eq } from 'drizzle-orm'
 import type { LayoutDocument, SignType } from '../../shared/schema/layout'
 import type { SignSchedule, TemplateId } from '../../shared/schema/api/signs'
 import { newId } from '../db/ids'
-import { projects, signs } from '../db/schema/index'
+import { projects, reviewComments, signReviews, signSignoffs, signs, users } from '../db/schema/index'
+import type { Transaction } from '../db/client'
+import type { CheckReport } from '../../shared/rules/types'
 import { checkDocument, checkSummary } from '../signs/check'
 import { buildSignLayout } from '../signs/templates'
 import { insertRevision } from '../signs/write'
@@ -11,6 +13,8 @@ import type { SeedStep } from './types'
 /** One invented demo sign: the words, the template, the schedule row, and an optional planted fault. */
 interface DemoSign {
   name: string
+  /** Where the demo shows the sign in the review workflow (default: draft). */
+  review?: 'in-review' | 'returned' | 'signed-off'
   signType: SignType
   templateId?: TemplateId
   text: string
@@ -29,8 +33,8 @@ const raised = (d: LayoutDocument) => d.elements.find((e) => e.kind === 'raised-
 
 /** Harbor Point Community Clinic's signs (invented). Four carry planted faults. */
 export const DEMO_SIGNS: DemoSign[] = [
-  { name: 'Exam Room 101', signType: 'room-identification', text: 'Exam Room\n101', schedule: { roomNumber: '101', roomName: 'Exam Room', floor: '1' } },
-  { name: 'Exam Room 102', signType: 'room-identification', text: 'Exam Room\n102', schedule: { roomNumber: '102', roomName: 'Exam Room', floor: '1' } },
+  { name: 'Exam Room 101', review: 'signed-off', signType: 'room-identification', text: 'Exam Room\n101', schedule: { roomNumber: '101', roomName: 'Exam Room', floor: '1' } },
+  { name: 'Exam Room 102', review: 'in-review', signType: 'room-identification', text: 'Exam Room\n102', schedule: { roomNumber: '102', roomName: 'Exam Room', floor: '1' } },
   {
     name: 'Exam Room 103',
     signType: 'room-identification',
@@ -41,7 +45,7 @@ export const DEMO_SIGNS: DemoSign[] = [
       apply: (doc) => edit(doc, (d) => void (braille(d).position.y -= d.units === 'in' ? 0.14 : 3.5)),
     },
   },
-  { name: 'Exam Room 104', signType: 'room-identification', text: 'Exam Room\n104', schedule: { roomNumber: '104', roomName: 'Exam Room', floor: '1' } },
+  { name: 'Exam Room 104', review: 'returned', signType: 'room-identification', text: 'Exam Room\n104', schedule: { roomNumber: '104', roomName: 'Exam Room', floor: '1' } },
   { name: 'Family Restroom 110', signType: 'restroom', text: 'Family\nRestroom', schedule: { roomNumber: '110', roomName: 'Family Restroom', floor: '1' } },
   { name: 'Waiting Room 100', signType: 'room-identification', text: 'Waiting\nRoom', schedule: { roomNumber: '100', roomName: 'Waiting Room', floor: '1' } },
   {
@@ -81,6 +85,31 @@ export const DEMO_SIGNS: DemoSign[] = [
   { name: 'Directional Exam Rooms', signType: 'directional', text: 'Exam Rooms\n101 to 104', schedule: { roomNumber: '', roomName: 'Corridor directional', floor: '1' } },
 ]
 
+/**
+ * Put a demo sign into the review workflow as the app would: a review of revision 1, then (per
+ * `status`) left open, returned with a pinned comment and a reply, or signed off with the check.
+ */
+async function demoReview(
+  tx: Transaction,
+  a: { organisationId: string; signId: string; status: 'in-review' | 'returned' | 'signed-off'; hash: string; report: CheckReport; authorId: string | null; reviewerId: string; document: LayoutDocument },
+) {
+  const reviewId = newId()
+  const closed = a.status === 'in-review' ? {} : { closedBy: a.reviewerId, closedAt: new Date() }
+  await tx.insert(signReviews).values({ id: reviewId, organisationId: a.organisationId, signId: a.signId, revision: 1, contentHash: a.hash, state: a.status === 'in-review' ? 'open' : a.status, note: 'Ready for review.', submittedBy: a.authorId, ...closed, decisionNote: a.status === 'returned' ? 'Please centre the braille under the number, see pin.' : null })
+  if (a.status === 'returned') {
+    const pinId = newId()
+    const braille = a.document.elements.find((e) => e.kind === 'braille')
+    const at = braille && 'position' in braille ? braille.position : { x: 1, y: 1 }
+    await tx.insert(reviewComments).values({ id: pinId, organisationId: a.organisationId, signId: a.signId, reviewId, revision: 1, x: at.x + 0.5, y: at.y, body: 'Client prefers the braille centred on this plate.', authorId: a.reviewerId })
+    await tx.insert(reviewComments).values({ id: newId(), organisationId: a.organisationId, signId: a.signId, reviewId, revision: 1, parentId: pinId, body: 'Will centre it and resubmit.', authorId: a.authorId })
+  }
+  if (a.status === 'signed-off') {
+    const [reviewer] = await tx.select({ displayName: users.displayName }).from(users).where(eq(users.id, a.reviewerId))
+    await tx.insert(signSignoffs).values({ id: newId(), organisationId: a.organisationId, signId: a.signId, reviewId, revision: 1, contentHash: a.hash, standardId: a.report.standard, engineVersion: a.report.engineVersion, report: a.report, fails: a.report.summary.fails, advisory: a.report.summary.advisory, justification: null, reviewerId: a.reviewerId, reviewerName: reviewer?.displayName ?? 'Reviewer' })
+  }
+  await tx.update(signs).set({ status: a.status, version: 2 }).where(eq(signs.id, a.signId))
+}
+
 export const demoSignsStep: SeedStep = {
   name: 'demo signs',
   async run(ctx) {
@@ -89,6 +118,7 @@ export const demoSignsStep: SeedStep = {
     if (!organisationId || !projectId) throw new Error('demo signs need the demo organisation and project steps first')
     const [project] = await ctx.db.select().from(projects).where(eq(projects.id, projectId)).limit(1)
     const authorId = ctx.ids.usersByEmail['designer@tidewater.example'] ?? null
+    const reviewerId = ctx.ids.usersByEmail['reviewer@tidewater.example'] ?? null
     let created = 0
     for (const s of DEMO_SIGNS) {
       const [existing] = await ctx.db.select({ id: signs.id }).from(signs).where(and(eq(signs.projectId, projectId), eq(signs.name, s.name))).limit(1)
@@ -111,7 +141,8 @@ export const demoSignsStep: SeedStep = {
           lastCheck: checkSummary(report, 1),
           lastEditorId: authorId,
         })
-        await insertRevision(tx, { signId: id, number: 1, document, authorId })
+        const hash = await insertRevision(tx, { signId: id, number: 1, document, authorId })
+        if (s.review && reviewerId) await demoReview(tx, { organisationId, signId: id, status: s.review, hash, report, authorId, reviewerId, document })
       })
       created++
     }
