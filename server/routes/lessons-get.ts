@@ -1,4 +1,5 @@
 import { and, eq } from 'drizzle-orm'
+import { selectFindings } from '../../shared/lessons/select'
 import { lessonParamsSchema } from '../../shared/schema/api/lessons'
 import { STANDARD_IDS } from '../../shared/standards/types'
 import type { CheckReport } from '../../shared/rules/types'
@@ -9,6 +10,16 @@ import { lessonCatalogue } from '../lessons/catalogue'
 import { lessonEngine } from '../lessons/engine'
 import { quizUnit } from '../lessons/quizUnit'
 import { defineRoute } from './define'
+
+/**
+ * The report trimmed to what the example's callouts name (plus the summary):
+ * the lesson shows callouts, not the full findings list, and this keeps a lesson
+ * at ~20 KB instead of ~180 KB of JSON.
+ */
+function calloutReport(r: CheckReport, selectors: ReadonlyArray<{ match: string }>): CheckReport {
+  const keep = new Set(selectors.flatMap((s) => selectFindings(r.findings, s.match)))
+  return { ...r, findings: r.findings.filter((f) => keep.has(f)) }
+}
 
 /**
  * One lesson: its Markdown, its examples with the engine's report under every
@@ -53,7 +64,7 @@ export const getLessonRoute = defineRoute({
           callouts: e.callouts,
           document: e.document,
           reports: Object.fromEntries(
-            (STANDARD_IDS as StandardId[]).map((s): [StandardId, CheckReport] => [s, engine.checkContent(`example:${e.id}`, e.document, s)]),
+            (STANDARD_IDS as StandardId[]).map((s): [StandardId, CheckReport] => [s, calloutReport(engine.checkContent(`example:${e.id}`, e.document, s), e.callouts)]),
           ),
         })),
         quiz: lesson.quiz.map((q) => ({ id: q.id, kind: q.kind, question: q.question, standard: q.standard, unit: quizUnit(q) })),
