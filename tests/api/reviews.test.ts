@@ -247,3 +247,21 @@ describe('review: bulk submit', () => {
     expect((await intruder.post(`/api/projects/${projectId}/signs/submit`, { signs: [{ id: sign.id, version: 1 }] })).status).toBe(404)
   })
 })
+
+describe('review: sign-offs are immutable in the database', () => {
+  it('an UPDATE or DELETE of a sign-off row is refused by MariaDB; deleting the sign still removes it', async () => {
+    const { srv, org, designer, reviewer, sign } = await setup('Frozen')
+    await designer.post(`/api/signs/${sign.id}/submit`, { version: 1 })
+    const off = (await reviewer.post(`/api/signs/${sign.id}/sign-off`, { version: 2 })).body.signoff
+    const { db } = testDb()
+    const reason = (e: any) => String(e?.cause?.message ?? e?.message)
+    expect(reason(await db.update(signSignoffs).set({ justification: 'edited later' }).where(eq(signSignoffs.id, off.id)).catch((e) => e))).toBe('sign-offs are immutable')
+    expect(reason(await db.delete(signSignoffs).where(eq(signSignoffs.id, off.id)).catch((e) => e))).toBe('sign-offs are immutable')
+    const [row] = await db.select().from(signSignoffs).where(eq(signSignoffs.id, off.id))
+    expect(row!.justification).toBeNull()
+    const admin = srv.client()
+    await admin.signIn(org.email.admin)
+    expect((await admin.delete(`/api/signs/${sign.id}`)).status).toBe(204)
+    expect(await db.select().from(signSignoffs).where(eq(signSignoffs.id, off.id))).toEqual([])
+  })
+})
