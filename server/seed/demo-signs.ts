@@ -1,4 +1,6 @@
+import { readFileSync } from 'node:fs'
 import { and, eq } from 'drizzle-orm'
+import { parseLayout } from '../../shared/schema/layout'
 import type { LayoutDocument, SignType } from '../../shared/schema/layout'
 import type { SignSchedule, TemplateId } from '../../shared/schema/api/signs'
 import { newId } from '../db/ids'
@@ -13,6 +15,8 @@ import type { SeedStep } from './types'
 /** One invented demo sign: the words, the template, the schedule row, and an optional planted fault. */
 interface DemoSign {
   name: string
+  /** An example layout in examples/ (engine helper's worked examples) used instead of the template. */
+  example?: string
   /** Where the demo shows the sign in the review workflow (default: draft). */
   review?: 'in-review' | 'returned' | 'signed-off'
   signType: SignType
@@ -31,10 +35,18 @@ const edit = (doc: LayoutDocument, f: (d: LayoutDocument) => void) => {
 const braille = (d: LayoutDocument) => d.elements.find((e) => e.kind === 'braille')!
 const raised = (d: LayoutDocument) => d.elements.find((e) => e.kind === 'raised-text')!
 
-/** Harbor Point Community Clinic's signs (invented). Four carry planted faults. */
+/** An example layout from examples/ (inch documents), named for the demo. */
+function loadExample(file: string, name: string): LayoutDocument {
+  const parsed = parseLayout(JSON.parse(readFileSync(new URL(`../../examples/${file}.json`, import.meta.url), 'utf8')))
+  if (!parsed.ok) throw new Error(`examples/${file}.json: ${parsed.issues.map((i) => `${i.path} ${i.message}`).join('; ')}`)
+  return { ...parsed.doc, name }
+}
+
+/** Harbor Point Community Clinic's signs (invented). Five carry planted faults. */
 export const DEMO_SIGNS: DemoSign[] = [
-  { name: 'Exam Room 101', review: 'signed-off', signType: 'room-identification', text: 'Exam Room\n101', schedule: { roomNumber: '101', roomName: 'Exam Room', floor: '1' } },
-  { name: 'Exam Room 102', review: 'in-review', signType: 'room-identification', text: 'Exam Room\n102', schedule: { roomNumber: '102', roomName: 'Exam Room', floor: '1' } },
+  { name: 'Exam Room 101', example: 'exam-room-101', review: 'signed-off', signType: 'room-identification', text: 'Exam Room\n101', schedule: { roomNumber: '101', roomName: 'Exam Room', floor: '1' } },
+  // Planted fault from the example: no tracking, "XA" closest points 0.064 in apart (§703.2.7, 1/8 in min).
+  { name: 'Exam Room 102', example: 'exam-room-102-tight-spacing', review: 'in-review', signType: 'room-identification', text: 'Exam Room\n102', schedule: { roomNumber: '102', roomName: 'Exam Room', floor: '1', notes: 'Planted fault: characters too close together' } },
   {
     name: 'Exam Room 103',
     signType: 'room-identification',
@@ -46,18 +58,10 @@ export const DEMO_SIGNS: DemoSign[] = [
     },
   },
   { name: 'Exam Room 104', review: 'returned', signType: 'room-identification', text: 'Exam Room\n104', schedule: { roomNumber: '104', roomName: 'Exam Room', floor: '1' } },
-  { name: 'Family Restroom 110', signType: 'restroom', text: 'Family\nRestroom', schedule: { roomNumber: '110', roomName: 'Family Restroom', floor: '1' } },
-  { name: 'Waiting Room 100', signType: 'room-identification', text: 'Waiting\nRoom', schedule: { roomNumber: '100', roomName: 'Waiting Room', floor: '1' } },
-  {
-    name: 'Records 120',
-    signType: 'room-identification',
-    text: 'Records',
-    schedule: { roomNumber: '120', roomName: 'Records', floor: '1', notes: 'Planted fault: mounted too high' },
-    fault: {
-      what: 'plate bottom raised to 59 1/2 in, putting the baseline above 60 in AFF (§703.4.1)',
-      apply: (doc) => edit(doc, (d) => void (d.installation.mountingHeight = d.units === 'in' ? 59.5 : 1510)),
-    },
-  },
+  { name: 'Family Restroom 110', example: 'family-restroom', signType: 'restroom', text: 'Family\nRestroom', schedule: { roomNumber: '110', roomName: 'Family Restroom', floor: '1' } },
+  // Planted fault from the example: on the hinge side, clear floor space in the door swing (§703.4.2).
+  { name: 'Waiting Room 100', example: 'waiting-room-hinge-side', signType: 'room-identification', text: 'Waiting\nRoom', schedule: { roomNumber: '100', roomName: 'Waiting Room', floor: '1', notes: 'Planted fault: sign on the hinge side' } },
+  { name: 'Records 120', signType: 'room-identification', text: 'Records', schedule: { roomNumber: '120', roomName: 'Records', floor: '1' } },
   {
     name: 'Laboratory 130',
     signType: 'room-identification',
@@ -81,8 +85,8 @@ export const DEMO_SIGNS: DemoSign[] = [
   { name: 'Exam Room 201', signType: 'room-identification', text: 'Exam Room\n201', schedule: { roomNumber: '201', roomName: 'Exam Room', floor: '2' } },
   { name: 'Exit Stair A', signType: 'exit', text: 'Exit Stair A', schedule: { roomNumber: 'S1', roomName: 'Exit Stair A', floor: '1' } },
   { name: 'Elevator Jamb Floor 1', signType: 'hoistway-jamb', text: '1', schedule: { roomNumber: 'E1', roomName: 'Elevator hoistway', floor: '1', quantity: 2, notes: 'Both jambs' } },
-  { name: 'Elevator Jamb Floor 2', signType: 'hoistway-jamb', text: '2', schedule: { roomNumber: 'E2', roomName: 'Elevator hoistway', floor: '2', quantity: 2, notes: 'Both jambs' } },
-  { name: 'Directional Exam Rooms', signType: 'directional', text: 'Exam Rooms\n101 to 104', schedule: { roomNumber: '', roomName: 'Corridor directional', floor: '1' } },
+  { name: 'Elevator Jamb Floor 2', example: 'elevator-hoistway-jamb-2', signType: 'hoistway-jamb', text: '2', schedule: { roomNumber: 'E2', roomName: 'Elevator hoistway', floor: '2', quantity: 2, notes: 'Both jambs' } },
+  { name: 'Directional Exam Rooms', example: 'directional-exam-rooms', signType: 'directional', text: 'Exam Rooms\n101 to 108', schedule: { roomNumber: '', roomName: 'Corridor directional', floor: '1' } },
 ]
 
 /**
@@ -123,7 +127,7 @@ export const demoSignsStep: SeedStep = {
     for (const s of DEMO_SIGNS) {
       const [existing] = await ctx.db.select({ id: signs.id }).from(signs).where(and(eq(signs.projectId, projectId), eq(signs.name, s.name))).limit(1)
       if (existing) continue
-      let document = await buildSignLayout({ signType: s.signType, templateId: s.templateId, text: s.text, units: project!.unitSystem, name: s.name })
+      let document = s.example && project!.unitSystem === 'in' ? loadExample(s.example, s.name) : await buildSignLayout({ signType: s.signType, templateId: s.templateId, text: s.text, units: project!.unitSystem, name: s.name })
       if (s.fault) document = s.fault.apply(document)
       const report = await checkDocument(ctx.db, organisationId, document, project!.standardId)
       const id = newId()

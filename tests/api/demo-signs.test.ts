@@ -40,8 +40,9 @@ describe('demo signs seed step', () => {
     const comments = await db.select().from(reviewComments).where(eq(reviewComments.signId, byName['Exam Room 104']!.id))
     expect(comments.map((c) => (c.parentId ? 'reply' : 'pin')).sort()).toEqual(['pin', 'reply'])
     expect(failingSections).toEqual({
+      'Exam Room 102': ['703.2.7'],
       'Exam Room 103': ['703.3.2'],
-      'Records 120': ['703.4.1'],
+      'Waiting Room 100': ['703.4.2'],
       'Laboratory 130': ['703.2.3'],
       'Staff Lounge 210': ['703.3'],
     })
