@@ -22,7 +22,8 @@ export const answerQuizRoute = defineRoute({
       fonts: engine.fonts,
       translate: engine.translate,
       examples: lesson.exampleDocs,
-      check: (doc, std) => engine.checkContent(`example:${doc.name}`, doc, std),
+      // Same cache key as the lesson route: each example is checked once per standard.
+      check: (doc, std) => engine.checkContent(`example:${lesson.exampleDocs.find((e) => e.document === doc)?.id ?? doc.name}`, doc, std),
     })
     res.json({ correct: isCorrect(item, expected, body.value), expected: { value: expected.value, unit: expected.unit }, explanation: expected.explanation })
   },
