@@ -122,13 +122,32 @@ export function useAutosave(opts: UseAutosaveOptions) {
     if ((status.value as SaveStatus) === 'unsaved') schedule()
   }
 
-  // Every change: keep a local copy at once, save after a pause.
+  // PERF: a drag changes the document every frame; the local copy is written at most every
+  // 200 ms (and always after the last change), which is still far inside any save delay.
+  let localTimer: ReturnType<typeof setTimeout> | null = null
+  let lastLocalWrite = 0
+  function keepLocalCopy() {
+    const sign = opts.sign.value
+    if (!sign || !store.doc) return
+    if (localTimer) { clearTimeout(localTimer); localTimer = null }
+    const write = () => {
+      localTimer = null
+      lastLocalWrite = Date.now()
+      const s = opts.sign.value
+      if (s && store.doc && currentJson() !== savedJson) writePending({ signId: s.id, baseVersion: s.version, doc: plainCopy(store.doc), savedAt: new Date().toISOString() })
+    }
+    const wait = 200 - (Date.now() - lastLocalWrite)
+    if (wait <= 0) write()
+    else localTimer = setTimeout(write, wait)
+  }
+
+  // Every change: keep a local copy, save after a pause.
   watch(() => store.changeCount, () => {
     const sign = opts.sign.value
     if (!sign || !store.doc) return
     const json = currentJson()
     if (json === savedJson) return
-    writePending({ signId: sign.id, baseVersion: sign.version, doc: plainCopy(store.doc), savedAt: new Date().toISOString() })
+    keepLocalCopy()
     if (status.value === 'conflict') return
     if (status.value !== 'offline') status.value = 'unsaved'
     schedule(status.value === 'offline' ? retry : delay)
@@ -136,6 +155,7 @@ export function useAutosave(opts: UseAutosaveOptions) {
 
   const onOnline = () => { if (status.value === 'offline') void saveNow() }
   const onBeforeUnload = (e: BeforeUnloadEvent) => {
+    if (localTimer) { clearTimeout(localTimer); localTimer = null; lastLocalWrite = 0; keepLocalCopy() }
     if (status.value !== 'saved') { e.preventDefault(); e.returnValue = '' }
   }
   onMounted(() => {
@@ -146,6 +166,7 @@ export function useAutosave(opts: UseAutosaveOptions) {
     window.removeEventListener('online', onOnline)
     window.removeEventListener('beforeunload', onBeforeUnload)
     if (timer) clearTimeout(timer)
+    if (localTimer) { clearTimeout(localTimer); localTimer = null; const sg = opts.sign.value; if (sg && store.doc && currentJson() !== savedJson) writePending({ signId: sg.id, baseVersion: sg.version, doc: plainCopy(store.doc), savedAt: new Date().toISOString() }) }
     // Leaving the editor: send what is left (the local copy stays until it arrives).
     if (status.value === 'unsaved') void saveNow()
   })
