@@ -43,6 +43,7 @@ import { answerProofRoute } from './proofs-public-answer'
 import { publicProofRoute } from './proofs-public-get'
 import { revokeProofRoute } from './proofs-revoke'
 import { bulkSubmitRoute } from './signs-submit-bulk'
+import { revisionCheckRoute } from './signs-revisions-check'
 import { inviteUserRoute } from './users-invite'
 import { listUsersRoute } from './users-list'
 import { updateUserRoute } from './users-update'
@@ -80,6 +81,7 @@ export const routes: readonly AnyRoute[] = [
   listRevisionsRoute,
   getRevisionRoute,
   restoreRevisionRoute,
+  revisionCheckRoute,
   // schedule CSV
   schedulePreviewRoute,
   scheduleImportRoute,

@@ -112,6 +112,22 @@ describe('signs: happy path', () => {
     expect(listed.lastCheck.fails).toBe(res.body.sign.lastCheck.fails)
   })
 
+  it("the server's check of a revision: the project's standard or another; 400 for an unknown standard", async () => {
+    const { c, projectId } = await setup('SignCheck')
+    const sign = await createRoomSign(c, projectId)
+    const res = await c.get(`/api/signs/${sign.id}/revisions/1/check`)
+    expect(res.status).toBe(200)
+    expect(res.body).toMatchObject({ revision: 1, contentHash: contentHash(sign.document), report: { standard: 'ada-2010', summary: { fails: 0 } } })
+    expect(res.body.report.findings.find((f: any) => f.rule === 'braille.separation-text')).toMatchObject({ section: '703.3.2', status: 'meets' })
+    const cbc = await c.get(`/api/signs/${sign.id}/revisions/1/check?standard=cbc-11b-2022`)
+    expect(cbc.body.report.standard).toBe('cbc-11b-2022')
+    expect(cbc.body.report.findings.some((f: any) => f.section.startsWith('11B-'))).toBe(true)
+    const bad = await c.get(`/api/signs/${sign.id}/revisions/1/check?standard=iso-21542`)
+    expect(bad.status).toBe(400)
+    expect(bad.body.error.details.issues[0].path).toBe('standard')
+    expect((await c.get(`/api/signs/${sign.id}/revisions/9/check`)).status).toBe(404)
+  })
+
   it('changing the sign type changes the document too, as a new revision', async () => {
     const { c, projectId } = await setup('SignType')
     const sign = await createRoomSign(c, projectId, 'Exit')
@@ -177,6 +193,7 @@ describe('signs: roles', () => {
       await trainee.get(`/api/projects/${projectId}/signs`),
       await trainee.get(`/api/signs/${sign.id}`),
       await trainee.get(`/api/signs/${sign.id}/revisions`),
+      await trainee.get(`/api/signs/${sign.id}/revisions/1/check`),
       await trainee.patch(`/api/signs/${sign.id}`, { version: 1, name: 'X' }),
     ]) expect(res.status).toBe(403)
     const [row] = await testDb().db.select().from(signs).where(eq(signs.id, sign.id))
@@ -297,6 +314,7 @@ describe('signs: organisation isolation', () => {
       await intruder.delete(`/api/signs/${sign.id}`),
       await intruder.get(`/api/signs/${sign.id}/revisions`),
       await intruder.get(`/api/signs/${sign.id}/revisions/1`),
+      await intruder.get(`/api/signs/${sign.id}/revisions/1/check`),
       await intruder.post(`/api/signs/${sign.id}/revisions/1/restore`, { version: 1 }),
     ]) {
       expect(res.status).toBe(404)
