@@ -16,6 +16,8 @@ async function openBrailleLesson(page: Page) {
 }
 
 test('trainee: braille lesson callouts, CBC switch, practice fix solved, progress', async ({ page }) => {
+  // Four axe scans and six full-page screenshots on two shared cores.
+  test.setTimeout(240_000)
   await signIn(page, 'trainee@tidewater.example')
   await expect(page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Lessons' })).toBeVisible()
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Lessons' }).click()
