@@ -22,6 +22,11 @@ export function limitLayoutBody(): RequestHandler[] {
       if (length > LAYOUT_MAX_BYTES + BODY_OVERHEAD) {
         return next(new AppError('payload_too_large', `A sign's layout may be at most ${LAYOUT_MAX_BYTES} bytes`))
       }
+      // A chunked body has no Content-Length: measure the parsed document itself.
+      const document = (req.body as { document?: unknown } | undefined)?.document
+      if (document !== undefined && Buffer.byteLength(JSON.stringify(document)) > LAYOUT_MAX_BYTES) {
+        return next(new AppError('payload_too_large', `A sign's layout may be at most ${LAYOUT_MAX_BYTES} bytes`))
+      }
       next()
     },
   ]

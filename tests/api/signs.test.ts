@@ -253,6 +253,15 @@ describe('signs: bad input → 400 naming the field', () => {
     const res = await c.patch(`/api/signs/${sign.id}`, big)
     expect(res.status).toBe(413)
     expect(res.body.error.code).toBe('payload_too_large')
+    // Without Content-Length (chunked), the parsed document is measured instead.
+    const stream = new ReadableStream({
+      start(ctrl) {
+        ctrl.enqueue(new TextEncoder().encode(JSON.stringify(big)))
+        ctrl.close()
+      },
+    })
+    const chunked = await fetch(`${c.base}/api/signs/${sign.id}`, { method: 'PATCH', headers: { Origin: c.base, Cookie: c.cookie, 'Content-Type': 'application/json' }, body: stream, duplex: 'half' } as RequestInit)
+    expect(chunked.status).toBe(413)
     const huge = await c.post(`/api/projects/${projectId}/signs`, { name: 'huge', signType: 'exit', text: 'x'.repeat(2_500_000) })
     expect(huge.status).toBe(413)
     expect((await c.get(`/api/signs/${sign.id}/revisions/7`)).status).toBe(404)
