@@ -11,7 +11,7 @@ import {
   type Signoff,
   type SignReviewState,
 } from '../../shared/schema/api/reviews'
-import { signResponseSchema, type Sign } from '../../shared/schema/api/signs'
+import { signListResponseSchema, signResponseSchema, type Sign, type SignSummary } from '../../shared/schema/api/signs'
 import type { CheckReport } from '../../shared/rules/types'
 import type { LayoutDocument } from '../../shared/schema/layout'
 import type { StandardId } from '../../shared/schema/api/projects'
@@ -28,6 +28,9 @@ export const reviewsApi = {
   /** Submit the sign's current revision (a stale `version` answers 409). */
   submit: async (signId: string, version: number, note?: string): Promise<Sign> =>
     (await request('POST', `/api/signs/${enc(signId)}/submit`, { body: { version, ...(note ? { note } : {}) }, schema: signResponseSchema })).sign as Sign,
+  /** Submit several signs of a project at once: all or none (a 409 lists every problem in `details.problems`). */
+  submitMany: async (projectId: string, signs: Array<{ id: string; version: number }>, note?: string): Promise<SignSummary[]> =>
+    (await request('POST', `/api/projects/${enc(projectId)}/signs/submit`, { body: { signs, ...(note ? { note } : {}) }, schema: signListResponseSchema })).signs,
   queue: async (state: ReviewState = 'open'): Promise<ReviewQueueItem[]> =>
     (await request('GET', `/api/reviews?state=${enc(state)}`, { schema: z.object({ reviews: z.array(reviewQueueItemSchema) }) })).reviews,
   state: (signId: string): Promise<SignReviewState> => request('GET', `/api/signs/${enc(signId)}/review`, { schema: signReviewStateSchema }),

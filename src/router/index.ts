@@ -32,6 +32,7 @@ export const routes: RouteRecordRaw[] = [
   { path: '/lessons/progress', name: 'lesson-progress', component: () => import('../views/TraineeProgressView.vue'), meta: { title: 'Lesson progress' } },
   { path: '/lessons/:id', name: 'lesson', component: () => import('../views/LessonView.vue'), props: true, meta: { title: 'Lesson' } },
   { path: '/practice/:practiceId', name: 'practice', component: () => import('../views/PracticeView.vue'), props: true, meta: { title: 'Practice' } },
+  { path: '/proof/:token', name: 'proof', component: () => import('../views/ProofView.vue'), props: true, meta: { public: true, title: 'Proof' } },
   { path: '/forbidden', name: 'forbidden', component: () => import('../views/ForbiddenView.vue'), meta: { title: 'Not allowed' } },
   { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('../views/NotFoundView.vue'), meta: { public: true, title: 'Page not found' } },
 ]

@@ -18,7 +18,8 @@ const SCHEDULE = path.join(ROOT, 'examples/harbor-point-schedule.csv')
 const DESIGNER = 'designer@tidewater.example'
 const REVIEWER = 'reviewer@tidewater.example'
 
-test.describe.configure({ timeout: 240_000 })
+// One long flow on 2 shared cores: import, batch check, two reviews, a proof, a PDF.
+test.describe.configure({ timeout: 480_000 })
 
 interface Mail {
   id: string
@@ -37,6 +38,8 @@ async function waitForMailLike(to: string, subject: RegExp, timeoutMs = 15_000):
     await new Promise((r) => setTimeout(r, 250))
   }
 }
+
+const esc = (s: string) => s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')
 
 async function check(page: Page, name: string) {
   await expectNoAxeViolations(page, name)
@@ -102,21 +105,26 @@ test('schedule import, batch check, review with a pinned comment, return, resubm
 
   // --- submit one sign for review from the table ---
   const row = table.getByRole('row', { name: /Exam Room 101\b/ })
-  await row.getByRole('checkbox').check()
+  await row.getByRole('checkbox', { name: 'Select Exam Room 101' }).check()
   await page.getByRole('button', { name: 'Submit for review (1)' }).click()
   await expect(row).toContainText('In review')
-  const requested = await waitForMailLike(REVIEWER, /^Review requested: Exam Room 101 \(revision 1\)/)
-  const reviewLink = /(http:\/\/\S+\/review)\b/.exec(requested.text)?.[1]
-  expect(reviewLink).toBeTruthy()
+  // Bulk submission sends one summary mail per reviewer, linking to the review queue.
+  const requested = await waitForMailLike(REVIEWER, new RegExp(`^Review requested: 1 signs in ${esc(projectName)}`))
+  expect(requested.text).toContain('Exam Room 101')
+  const queueLink = /(http:\/\/\S+\/reviews)\b/.exec(requested.text)?.[1]
+  expect(queueLink).toBeTruthy()
 
   // --- reviewer: queue, pinned comment, return ---
   const reviewer = await personPage(browser, REVIEWER)
-  await reviewer.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Reviews' }).click()
+  await reviewer.goto(queueLink!)
   await expect(reviewer.getByRole('heading', { level: 1, name: 'Reviews' })).toBeVisible()
   const queue = reviewer.getByTestId('review-queue')
-  await expect(queue.getByRole('row', { name: new RegExp(`Exam Room 101.*${projectName.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}`) })).toBeVisible()
+  const queued = queue.getByRole('row', { name: new RegExp(`Exam Room 101.*${esc(projectName)}`) })
+  await expect(queued).toBeVisible()
   await check(reviewer, 'review-04-queue')
-  await reviewer.goto(reviewLink!)
+  await queued.getByRole('link', { name: 'Exam Room 101' }).click()
+  await expect(reviewer).toHaveURL(/\/projects\/[a-z0-9]+\/signs\/[a-z0-9]+\/review$/)
+  const reviewLink = reviewer.url()
   await expect(reviewer.getByRole('heading', { level: 1, name: 'Review: Exam Room 101' })).toBeVisible()
   await expect(reviewer.getByTestId('review-findings-summary')).toBeVisible()
   // A finding shows its dimension on the drawing.
@@ -140,7 +148,7 @@ test('schedule import, batch check, review with a pinned comment, return, resubm
   expect(returned.text).toContain('See the pinned comment on the braille')
 
   // --- designer: reply, fix, resubmit ---
-  await page.goto(reviewLink!.replace(new URL(reviewLink!).origin, ''))
+  await page.goto(reviewLink)
   await expect(page.getByRole('heading', { level: 1, name: 'Review: Exam Room 101' })).toBeVisible()
   await page.getByLabel('Reply to comment 1').fill('Moved down 1/16 in.')
   await page.getByTestId('thread-1').getByRole('button', { name: 'Reply' }).click()
@@ -158,10 +166,11 @@ test('schedule import, batch check, review with a pinned comment, return, resubm
   await expect(page.getByText('Revision 2', { exact: true })).toBeVisible()
   await page.getByRole('button', { name: 'Submit for review' }).click()
   await expect(page.getByText('In review', { exact: true }).first()).toBeVisible()
-  await waitForMailLike(REVIEWER, /^Review requested: Exam Room 101 \(revision 2\)/)
+  const again = await waitForMailLike(REVIEWER, /^Review requested: Exam Room 101 \(revision 2\)/)
+  expect(again.text).toContain(reviewLink)
 
   // --- reviewer signs off revision 2 ---
-  await reviewer.goto(reviewLink!)
+  await reviewer.goto(reviewLink)
   await expect(reviewer.getByRole('heading', { name: 'Decision on revision 2' })).toBeVisible()
   await reviewer.getByRole('button', { name: 'Sign off revision 2' }).click()
   const signoffs = reviewer.getByTestId('signoffs')
@@ -184,4 +193,44 @@ test('schedule import, batch check, review with a pinned comment, return, resubm
   expect(readdirSync(dir).some((f) => f.startsWith('page') && f.endsWith('.png'))).toBe(true)
 
   await reviewer.context().close()
+
+  // --- proof: the designer sends it, the client opens the link in a fresh context and approves ---
+  const client = `client-${Date.now().toString(36)}@harbor-point.example`
+  await page.goto(`/projects/${projectId}`)
+  const signedRow = page.getByTestId('sign-table').getByRole('row', { name: /Exam Room 101\b/ })
+  await expect(signedRow).toContainText('Signed off')
+  await signedRow.getByRole('checkbox', { name: 'Select Exam Room 101' }).check()
+  await page.getByRole('button', { name: 'Send proof (1)' }).click()
+  const proofDialog = page.getByRole('dialog', { name: 'Send a proof to the client' })
+  await proofDialog.getByLabel("Client's e-mail").fill(client)
+  await proofDialog.getByLabel('Message (optional)').fill('Here is the exam room sign for your approval.')
+  await check(page, 'review-07-send-proof')
+  await proofDialog.getByRole('button', { name: 'Send proof' }).click()
+  await expect(proofDialog).toBeHidden()
+  await expect(page.getByTestId('proof-list')).toContainText('Waiting for the client')
+  const proofMail = await waitForMailLike(client, /^Sign proof from Tidewater Tactile Signs/)
+  const proofLink = /(http:\/\/\S+\/proof\/[A-Za-z0-9_-]+)/.exec(proofMail.text)?.[1]
+  expect(proofLink).toBeTruthy()
+
+  const clientCtx = await browser.newContext()
+  const clientPage = await clientCtx.newPage()
+  await clientPage.goto(proofLink!)
+  await expect(clientPage.getByRole('heading', { level: 1, name: projectName })).toBeVisible()
+  const proofSign = clientPage.getByTestId('proof-sign')
+  await expect(proofSign).toHaveCount(1)
+  await expect(proofSign).toContainText('EXAM ROOM / 101')
+  await expect(proofSign).toContainText('0.75 in') // uppercase I height of the template (§703.2.5: 5/8 in to 2 in)
+  await expect(proofSign.locator('.proof__braille')).toHaveText(/[\u2800-\u28ff]/)
+  // The drawing's glyph outlines arrive from the engine worker.
+  await expect(proofSign.locator('[data-testid="sign-drawing"] path[transform^="translate"]').first()).toBeAttached({ timeout: 30_000 })
+  await check(clientPage, 'review-08-proof-page')
+  await clientPage.getByLabel('Your name (optional)').fill('Jordan Client')
+  await clientPage.getByRole('button', { name: 'Approve' }).click()
+  await expect(clientPage.getByTestId('proof-answered')).toContainText('Approved')
+  await check(clientPage, 'review-09-proof-approved')
+  await clientCtx.close()
+  const answeredMail = await waitForMailLike(DESIGNER, new RegExp(`^Proof approved: ${esc(projectName)}`))
+  expect(answeredMail.text).toContain('Jordan Client')
+  await page.reload()
+  await expect(page.getByTestId('proof-list')).toContainText('Approved')
 })
