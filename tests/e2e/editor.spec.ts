@@ -179,6 +179,8 @@ test('each save makes a revision; an earlier one can be restored', async ({ page
   await expect(page.getByTestId('save-status')).toHaveText(/Saved/, { timeout: 10_000 })
   await expect(page.getByText('revision 2', { exact: true })).toBeVisible()
   await page.getByRole('tab', { name: 'Revisions' }).click()
+  await page.getByRole('button', { name: 'Show revision 1' }).click()
+  await expect(page.getByRole('img', { name: /^Revision 1: .*LAB$/ })).toBeVisible()
   const restore = page.getByRole('button', { name: 'Restore revision 1' })
   await restore.click()
   await page.getByRole('button', { name: 'Confirm restore of revision 1' }).click()
