@@ -234,3 +234,70 @@ test('schedule import, batch check, review with a pinned comment, return, resubm
   await page.reload()
   await expect(page.getByTestId('proof-list')).toContainText('Approved')
 })
+
+test('a failing revision needs a justification to be signed off; an edit afterwards shows "Superseded" everywhere', async ({ page, browser }) => {
+  await signIn(page, DESIGNER)
+  const origin = new URL(page.url()).origin
+  const api = page.request
+  const projectName = `Harbor Point Clinic, records wing ${Date.now().toString(36)}`
+  const projectId = (await (await api.post('/api/projects', { data: { name: projectName }, headers: { Origin: origin } })).json()).project.id as string
+  const created = await api.post(`/api/projects/${projectId}/signs`, { data: { name: 'Records 120', signType: 'room-identification', text: 'Records\n120' }, headers: { Origin: origin } })
+  expect(created.status()).toBe(201)
+  const sign = (await created.json()).sign
+  // Planted fault: braille 0.14 in closer to the text, 0.25 in as measured, where §703.3.2 asks 3/8 in.
+  const doc = structuredClone(sign.document)
+  doc.elements.find((e: { kind: string }) => e.kind === 'braille').position.y -= 0.14
+  const edited = (await (await api.patch(`/api/signs/${sign.id}`, { data: { version: sign.version, document: doc }, headers: { Origin: origin } })).json()).sign
+  expect((await api.post(`/api/signs/${sign.id}/submit`, { data: { version: edited.version }, headers: { Origin: origin } })).status()).toBe(200)
+
+  const reviewer = await personPage(browser, REVIEWER)
+  await reviewer.goto(`/projects/${projectId}/signs/${sign.id}/review`)
+  const decision = reviewer.getByTestId('decision-panel')
+  await expect(decision).toContainText("The server's check finds 1 failing finding")
+  const signOff = decision.getByRole('button', { name: 'Sign off revision 2' })
+  await expect(signOff).toBeDisabled()
+  await decision.getByLabel('Justification').fill('Too short.')
+  await expect(signOff).toBeDisabled()
+  await decision.getByLabel('Justification').fill('Accepted by the owner: braille gap 0.25 in matches the existing wing signs; AHJ to confirm.')
+  await expect(signOff).toBeEnabled()
+  await check(reviewer, 'review-10-justification')
+  await signOff.click()
+  const signoffs = reviewer.getByTestId('signoffs')
+  await expect(signoffs).toContainText('Signed off: revision 2')
+  await expect(signoffs).toContainText('1 fails, 2 advisory')
+  await expect(signoffs).toContainText('Accepted by the owner: braille gap 0.25 in')
+  await reviewer.context().close()
+
+  // Any later edit makes a new revision: the sign-off stays for revision 2 and reads as superseded.
+  const now = (await (await api.get(`/api/signs/${sign.id}`)).json()).sign
+  const fixed = structuredClone(now.document)
+  fixed.elements.find((e: { kind: string }) => e.kind === 'braille').position.y += 0.14
+  expect((await api.patch(`/api/signs/${sign.id}`, { data: { version: now.version, document: fixed }, headers: { Origin: origin } })).status()).toBe(200)
+  await page.goto(`/projects/${projectId}`)
+  const row = page.getByTestId('sign-table').getByRole('row', { name: /Records 120/ })
+  await expect(row).toContainText('Superseded')
+  await check(page, 'review-11-project-superseded')
+  await row.getByRole('link', { name: 'Review Records 120' }).click()
+  await expect(page.getByTestId('superseded-banner')).toContainText('Revision 2 was signed off by Riley Reviewer')
+  await expect(page.getByTestId('signoffs')).toContainText('Superseded: revision 2')
+  await check(page, 'review-12-review-superseded')
+
+  // The project summary PDF says so too.
+  await page.goto(`/projects/${projectId}`)
+  const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Download project report' }).click()])
+  const dir = mkdtempSync(path.join(tmpdir(), 'tp-e2e-pdf-'))
+  const pdfPath = path.join(dir, 'project.pdf')
+  await download.saveAs(pdfPath)
+  const text = execFileSync('pdftotext', ['-layout', pdfPath, '-']).toString()
+  expect(text).toContain(`Project summary: ${projectName}`)
+  expect(text).toMatch(/Records 120\s+Room\s+Superseded\s+3/)
+  expect(text).toContain('(superseded)')
+
+  // A wrong proof link: a clear page, no account needed.
+  const anon = await browser.newContext()
+  const anonPage = await anon.newPage()
+  await anonPage.goto('/proof/not-a-real-token-0123456789abcdef0123456789')
+  await expect(anonPage.getByRole('heading', { level: 1, name: 'Proof not found' })).toBeVisible()
+  await check(anonPage, 'review-13-proof-not-found')
+  await anon.close()
+})
