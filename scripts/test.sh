@@ -38,30 +38,6 @@ if [ "$build_failed" -eq 0 ]; then
 fi
 
 # One closing line for CI: the sum of both runners' counts (a build failure counts as one failure).
-summary="$(node --input-type=module - "$RESULTS" "$build_failed" <<'JS'
-import { existsSync, readFileSync } from 'node:fs'
-const [dir, buildFailed] = process.argv.slice(2)
-let passed = 0, failed = Number(buildFailed)
-const read = (f) => (existsSync(f) ? JSON.parse(readFileSync(f, 'utf8')) : undefined)
-const v = read(`${dir}/vitest.json`)
-if (!v) failed += 1
-else {
-  passed += v.numPassedTests
-  failed += v.numFailedTests
-  // A file that fails to load has no failed tests of its own: count it once.
-  if (!v.success && v.numFailedTests === 0) failed += Math.max(1, v.numFailedTestSuites)
-}
-if (buildFailed === '0') {
-  const p = read(`${dir}/playwright.json`)
-  if (!p) failed += 1
-  else {
-    passed += p.stats.expected + p.stats.flaky
-    failed += p.stats.unexpected
-    if (p.stats.unexpected === 0 && (p.errors?.length ?? 0) > 0) failed += 1
-  }
-}
-console.log(`${passed} passed, ${failed} failed`)
-JS
-)"
+summary="$(node --import tsx scripts/test-summary.ts "$RESULTS" "$build_failed")"
 echo "$summary"
 case "$summary" in *" 0 failed") [ "$status" -eq 0 ] || exit 1 ;; *) exit 1 ;; esac
