@@ -47,6 +47,7 @@ import { revisionCheckRoute } from './signs-revisions-check'
 import { inviteUserRoute } from './users-invite'
 import { listUsersRoute } from './users-list'
 import { updateUserRoute } from './users-update'
+import { resendInvitationRoute } from './users-resend-invitation'
 import { projectReportRoute } from './reports-project'
 import { signReportRoute } from './reports-sign'
 
@@ -113,6 +114,7 @@ export const routes: readonly AnyRoute[] = [
   listUsersRoute,
   inviteUserRoute,
   updateUserRoute,
+  resendInvitationRoute,
   // lessons, practice copies, progress
   ...lessonRoutes,
   // PDF reports

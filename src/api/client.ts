@@ -116,6 +116,8 @@ export const api = {
   users: {
     list: async (): Promise<User[]> => (await request('GET', '/api/users', { schema: userListResponseSchema })).users,
     invite: (body: InviteUserBody) => request('POST', '/api/users', { body, schema: inviteUserResponseSchema.extend({ mailSent: z.boolean() }) }),
+    resendInvitation: (id: string) =>
+      request('POST', `/api/users/${encodeURIComponent(id)}/invitation`, { schema: userResponseSchema.extend({ mailSent: z.boolean() }) }),
     update: async (id: string, body: { role?: User['role']; disabled?: boolean }): Promise<User> =>
       (await request('PATCH', `/api/users/${encodeURIComponent(id)}`, { body, schema: userResponseSchema })).user,
   },

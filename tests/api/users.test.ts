@@ -76,6 +76,30 @@ describe('users admin', () => {
     expect(set.body.error.message).toBe('This link has expired or was already used')
   })
 
+  it('resends an invitation: the new link works, the old one stops; accepted users get 409', async () => {
+    const srv = await startTestServer()
+    const org = await createTestOrg('Resend')
+    const other = await createTestOrg('ResendOther')
+    const admin = srv.client()
+    await admin.signIn(org.email.admin)
+    const email = `again-${Date.now()}@org.test`
+    const id = (await admin.post('/api/users', { email, displayName: 'Again', role: 'designer' })).body.user.id
+    const first = linkIn(srv.outbox[0]!.text).token
+    const res = await admin.post(`/api/users/${id}/invitation`)
+    expect(res.status).toBe(200)
+    expect(res.body).toMatchObject({ mailSent: true, user: { id, status: 'invited' } })
+    expect(srv.outbox).toHaveLength(2)
+    const second = linkIn(srv.outbox[1]!.text).token
+    expect(second).not.toBe(first)
+    const anon = srv.client()
+    expect((await anon.post('/api/auth/set-password', { token: first, password: 'a long new password' })).status).toBe(404)
+    expect((await anon.post('/api/auth/set-password', { token: second, password: 'a long new password' })).status).toBe(200)
+    const again = await admin.post(`/api/users/${id}/invitation`)
+    expect(again.status).toBe(409)
+    expect((await admin.post(`/api/users/${other.userId.trainee}/invitation`)).status).toBe(404)
+    expect(srv.outbox).toHaveLength(2)
+  })
+
   it('refuses a duplicate e-mail with 409 and a bad role with 400 naming role', async () => {
     const srv = await startTestServer()
     const org = await createTestOrg('Dup')

@@ -1,5 +1,5 @@
 import { expect, test } from '@playwright/test'
-import { signIn, waitForMail } from './support'
+import { signIn, waitForMail, waitForMails } from './support'
 
 test('admin invites by e-mail; the invitee follows the mailed link, sets a password and signs in', async ({ page }) => {
   const email = `invitee-${Date.now()}@tidewater.example`
@@ -48,4 +48,23 @@ test('admin invites by e-mail; the invitee follows the mailed link, sets a passw
   await page.getByRole('button', { name: 'Sign out' }).click()
   await page.goto(link!)
   await expect(page.getByRole('alert')).toContainText('expired or was already used')
+})
+
+test('admin resends an invitation: a second mail arrives and only its link works', async ({ page }) => {
+  const email = `resend-${Date.now()}@tidewater.example`
+  await signIn(page, 'admin@tidewater.example')
+  const origin = new URL(page.url()).origin
+  const res = await page.request.post('/api/users', { data: { email, displayName: 'Robin Resend', role: 'designer' }, headers: { Origin: origin } })
+  expect(res.status()).toBe(201)
+  await page.goto('/admin/users')
+  await page.getByRole('button', { name: 'Resend invitation to Robin Resend' }).click()
+  await expect(page.getByText('Invitation sent again')).toBeVisible()
+  const [first, second] = await waitForMails(email, 2)
+  const tokenOf = (text: string) => /accept-invitation\?token=([A-Za-z0-9_-]+)/.exec(text)![1]!
+  expect(tokenOf(second!.text)).not.toBe(tokenOf(first!.text))
+  await page.getByRole('button', { name: 'Sign out' }).click()
+  await page.goto(`/accept-invitation?token=${tokenOf(first!.text)}`)
+  await expect(page.getByRole('alert')).toContainText('expired or was already used')
+  await page.goto(`/accept-invitation?token=${tokenOf(second!.text)}`)
+  await expect(page.getByText('Welcome, Robin Resend')).toBeVisible()
 })

@@ -43,14 +43,18 @@ interface MaildevMail {
 }
 
 /** Wait for a mail to `to` in the fake inbox and return it (polls; no fixed sleeps). */
-export async function waitForMail(to: string, timeoutMs = 10_000): Promise<MaildevMail> {
+export async function waitForMail(to: string, timeoutMs = 15_000): Promise<MaildevMail> {
+  return (await waitForMails(to, 1, timeoutMs))[0]!
+}
+
+/** Wait until at least `count` mails to `to` arrived; returns them oldest first. */
+export async function waitForMails(to: string, count: number, timeoutMs = 15_000): Promise<MaildevMail[]> {
   const deadline = Date.now() + timeoutMs
   for (;;) {
     const res = await fetch(MAIL_API)
-    const mails = (await res.json()) as MaildevMail[]
-    const hit = mails.find((m) => m.to.some((t) => t.address === to))
-    if (hit) return hit
-    if (Date.now() > deadline) throw new Error(`no mail to ${to} within ${timeoutMs} ms`)
+    const mails = ((await res.json()) as MaildevMail[]).filter((m) => m.to.some((t) => t.address === to))
+    if (mails.length >= count) return mails
+    if (Date.now() > deadline) throw new Error(`${mails.length} of ${count} mails to ${to} within ${timeoutMs} ms`)
     await new Promise((r) => setTimeout(r, 200))
   }
 }
