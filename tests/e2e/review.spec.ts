@@ -103,11 +103,25 @@ test('schedule import, batch check, review with a pinned comment, return, resubm
   await expect(table.getByText('Not checked yet')).toHaveCount(0)
   await check(page, 'review-03-batch-checked')
 
+  // Filters and sorting: find by name, sort by sign name descending.
+  await page.getByLabel('Find').fill('Exam Room 10')
+  await expect(table.locator('tbody tr')).toHaveCount(6) // rooms 101 to 106
+  const signHeader = table.getByRole('columnheader', { name: 'Sign', exact: true })
+  await signHeader.click() // ascending → descending
+  await expect(signHeader).toHaveAttribute('aria-sort', 'descending')
+  await expect(table.locator('tbody tr').first()).toContainText('Exam Room 106')
+  await page.getByLabel('Find').fill('')
+  await expect(table.locator('tbody tr')).toHaveCount(rowCount)
+
   // --- submit one sign for review from the table ---
   const row = table.getByRole('row', { name: /Exam Room 101\b/ })
   await row.getByRole('checkbox', { name: 'Select Exam Room 101' }).check()
   await page.getByRole('button', { name: 'Submit for review (1)' }).click()
   await expect(row).toContainText('In review')
+  await page.getByRole('combobox', { name: 'Status' }).click()
+  await page.getByRole('option', { name: 'In review' }).click()
+  await expect(table.locator('tbody tr')).toHaveCount(1)
+  await page.getByRole('combobox', { name: 'Status' }).press('Escape')
   // Bulk submission sends one summary mail per reviewer, linking to the review queue.
   const requested = await waitForMailLike(REVIEWER, new RegExp(`^Review requested: 1 signs in ${esc(projectName)}`))
   expect(requested.text).toContain('Exam Room 101')
@@ -282,8 +296,14 @@ test('a failing revision needs a justification to be signed off; an edit afterwa
   await expect(page.getByTestId('signoffs')).toContainText('Superseded: revision 2')
   await check(page, 'review-12-review-superseded')
 
-  // The project summary PDF says so too.
+  // The schedule export carries each sign's status.
   await page.goto(`/projects/${projectId}`)
+  const [csv] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Export schedule' }).click()])
+  const csvText = readFileSync((await csv.path())!, 'utf8')
+  expect(csvText).toMatch(/Records 120|Records,/)
+  expect(csvText.toLowerCase()).toContain('superseded')
+
+  // The project summary PDF says so too.
   const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Download project report' }).click()])
   const dir = mkdtempSync(path.join(tmpdir(), 'tp-e2e-pdf-'))
   const pdfPath = path.join(dir, 'project.pdf')
