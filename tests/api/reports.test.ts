@@ -182,6 +182,28 @@ describe('sign report: happy path', () => {
   })
 })
 
+describe('sign report: metric project', () => {
+  it('draws a millimetre layout with millimetre figures and a metric scale bar', async () => {
+    const srv = await startTestServer()
+    const org = await createTestOrg('RptMetric')
+    const c = srv.client()
+    await c.signIn(org.email.designer)
+    const projectId = (await c.post('/api/projects', { name: 'RptMetric clinic', unitSystem: 'mm', standardId: 'cbc-11b-2022' })).body.project.id as string
+    const sign = (await c.post(`/api/projects/${projectId}/signs`, { name: 'Lab 130', signType: 'room-identification', text: 'Lab\n130' })).body.sign
+    expect(sign.document.units).toBe('mm')
+    const res = await getBytes(c, `/api/signs/${sign.id}/report.pdf`, 'sign-metric')
+    expect(res.status).toBe(200)
+    const text = pdfText(res.bytes)
+    expect(text).toContain('California CBC 11B (2022)')
+    // CBC numbers its sections 11B-703.x.
+    expect(text).toMatch(/11B-703\.2\.5/)
+    expect(text).toMatch(/Plate \d+(\.\d+)? mm x \d+(\.\d+)? mm/)
+    expect(text).toMatch(/\b10 mm\b/) // scale bar steps of 10 mm
+    const page = renderPage(res.bytes, 1)
+    expect(page.width).toBeGreaterThan(0)
+  })
+})
+
 describe('project report', () => {
   it('summarises every sign with status, counts and sign-off; renders', async () => {
     const { designer, projectId, sign } = await setup('RptProject')
