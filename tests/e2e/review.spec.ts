@@ -321,3 +321,17 @@ test('a failing revision needs a justification to be signed off; an edit afterwa
   await check(anonPage, 'review-13-proof-not-found')
   await anon.close()
 })
+
+test('demo clinic: the sign table shows the planted faults and filters to them', async ({ page }) => {
+  await signIn(page, DESIGNER)
+  await page.getByRole('table', { name: 'Projects' }).getByRole('link', { name: 'Harbor Point Community Clinic' }).click()
+  const table = page.getByTestId('sign-table')
+  // Seeded "Exam Room 103" has its braille 1/4 in under the text (§703.3.2 asks 3/8 in): its stored check fails.
+  const faulty = table.getByRole('row', { name: /Exam Room 103/ })
+  await expect(faulty.locator('.tp-status--fails')).toBeVisible()
+  await page.getByText('With fails only').click()
+  const shown = await table.locator('tbody tr').count()
+  expect(shown).toBeGreaterThanOrEqual(1)
+  await expect(table.getByRole('row', { name: /Exam Room 101\b/ })).toHaveCount(0)
+  await check(page, 'review-14-demo-fails-only')
+})
