@@ -123,6 +123,26 @@ async function main(): Promise<void> {
     console.log(`${m.wall.toFixed(3).padStart(10)} ${m.cpu.toFixed(3).padStart(10)}  ${s.name}${note ? `  [${note}]` : ''}`)
   }
   console.log('CPU ms counts this process only (steadier on a shared machine); ms below 1 are at the timer resolution of cpuUsage (µs).')
+  console.log('')
+  const { runBrailleBench, formatBrailleBench } = await import('../server/braille/bench')
+  console.log(formatBrailleBench(runBrailleBench()))
+  if (!process.argv.includes('--no-batch')) await runBatchBench()
+}
+
+/**
+ * The 500-sign schedule import + server batch check (scripts/bench-batch.ts) needs the private
+ * MariaDB; run it when the database answers, otherwise say how to get one.
+ */
+async function runBatchBench(): Promise<void> {
+  const { spawnSync } = await import('node:child_process')
+  const ping = spawnSync('mariadb-admin', ['--defaults-file=.data/mariadb.cnf', '--connect-timeout=2', 'ping'], { stdio: 'ignore' })
+  console.log('')
+  if (ping.status !== 0) {
+    console.log('batch check of a 500-sign schedule: skipped — the private MariaDB is not running (npm start, then npm run bench)')
+    return
+  }
+  const r = spawnSync(process.execPath, ['--import', 'tsx', 'scripts/bench-batch.ts'], { stdio: 'inherit' })
+  if (r.status !== 0) throw new Error('scripts/bench-batch.ts failed')
 }
 
 main().catch((e) => {
