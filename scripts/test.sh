@@ -7,7 +7,8 @@ set -euo pipefail
 source "$(dirname "$0")/setup.sh"
 cd "$TP_ROOT"
 
-tp_ensure_debs mariadb-server chromium poppler-utils
+# liblouis-bin: Debian's liblouis 3.24, an independent cross-check of the braille tests (tests/reference/braille)
+tp_ensure_debs mariadb-server chromium poppler-utils liblouis-bin
 tp_ensure_node_modules
 tp_db_start
 
