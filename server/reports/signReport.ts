@@ -10,7 +10,7 @@ import type { Measurements } from '../../shared/rules/measure/types'
 import type { CheckReport, Finding } from '../../shared/rules/types'
 import { STANDARD_LABELS, type StandardId } from '../../shared/schema/api/projects'
 import { SIGN_STATUS_LABELS, type SignStatus } from '../../shared/schema/api/signs'
-import type { LayoutDocument, SignType } from '../../shared/schema/layout'
+import { SIGN_TYPE_LABELS, type LayoutDocument, type SignType } from '../../shared/schema/layout'
 import type { Queryable } from '../db/client'
 import { organisations } from '../db/schema/index'
 import { resolveDocumentFonts } from '../fonts/resolver'
@@ -45,16 +45,7 @@ export interface SignReportData {
   generatedBy: string
 }
 
-const SIGN_TYPE_WORDS: Record<SignType, string> = {
-  'room-identification': 'Room identification',
-  restroom: 'Restroom',
-  exit: 'Exit',
-  'hoistway-jamb': 'Hoistway jamb',
-  directional: 'Directional',
-  informational: 'Informational',
-  'elevator-car-control': 'Elevator car control',
-}
-export const signTypeWord = (t: SignType) => SIGN_TYPE_WORDS[t] ?? t
+export const signTypeWord = (t: SignType) => SIGN_TYPE_LABELS[t] ?? t
 
 /**
  * Gather one revision (default: the current one) of a sign the caller's organisation owns;

@@ -287,6 +287,17 @@ export const SIGN_TYPES = [
 export const SignTypeSchema = z.enum(SIGN_TYPES)
 export type SignType = z.infer<typeof SignTypeSchema>
 
+/** The words people read for each sign type (tables, reports, dialogs). */
+export const SIGN_TYPE_LABELS: Record<SignType, string> = {
+  'room-identification': 'Room identification',
+  restroom: 'Restroom',
+  exit: 'Exit',
+  'hoistway-jamb': 'Hoistway jamb',
+  directional: 'Directional',
+  informational: 'Informational',
+  'elevator-car-control': 'Elevator car control',
+}
+
 /**
  * The door in plan, seen from the sign side (standing in front of the wall,
  * facing it). The wall runs left–right; the door opening is `leafWidth` wide
